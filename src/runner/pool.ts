@@ -1,0 +1,131 @@
+/**
+ * Runs a whole suite, in this thread or on worker threads. Items are handed out in chunks from one
+ * queue (so a slow case does not hold up a worker's share) and put back in item order, so the results
+ * are identical whatever the number of workers.
+ */
+import { Worker } from "node:worker_threads";
+import { RunBatch } from "./batch.js";
+import type { CaseResult, RunMetrics, SuiteSpec } from "./types.js";
+
+export interface RunSuiteOptions {
+  /** Worker threads; 1 runs in this thread. */
+  readonly workers?: number;
+  /** Called after each finished chunk with (runs done, runs in all). */
+  readonly onProgress?: (done: number, total: number) => void;
+  /** Only these items (indices into the flat run list), e.g. one shard; default all. */
+  readonly items?: readonly number[];
+}
+
+/** Where the worker script lives; a bundle may point this at itself (see setWorkerEntry). */
+let workerEntry: { url: URL; execArgv: string[]; data: Record<string, unknown> } | null = null;
+
+/** Lets a bundled entry point run workers from its own file, marking them with `data`. */
+export function setWorkerEntry(url: URL, data: Record<string, unknown> = {}): void {
+  workerEntry = { url, execArgv: [], data };
+}
+
+function defaultWorkerEntry() {
+  const here = new URL(import.meta.url);
+  const ts = here.pathname.endsWith(".ts");
+  return {
+    url: new URL(ts ? "./worker.ts" : "./worker.js", here),
+    // Sources run through tsx in development and tests; the build runs plain JavaScript.
+    execArgv: ts ? ["--import", "tsx"] : [],
+    data: {},
+  };
+}
+
+export async function runSuite(suite: SuiteSpec, options: RunSuiteOptions = {}): Promise<CaseResult[]> {
+  const batch = new RunBatch(suite);
+  const items = options.items ?? Array.from({ length: batch.size }, (_, i) => i);
+  const metrics = new Map<number, RunMetrics>();
+  const workers = Math.max(1, Math.min(options.workers ?? 1, items.length));
+  const progress = options.onProgress ?? (() => {});
+
+  if (workers === 1) {
+    let done = 0;
+    for (const item of items) {
+      metrics.set(item, await batch.runItem(item));
+      done++;
+      if (done % 16 === 0 || done === items.length) progress(done, items.length);
+    }
+  } else {
+    await runOnWorkers(suite, items, workers, metrics, progress);
+  }
+  return assemble(suite, batch, items, metrics);
+}
+
+async function runOnWorkers(
+  suite: SuiteSpec,
+  items: readonly number[],
+  count: number,
+  metrics: Map<number, RunMetrics>,
+  progress: (done: number, total: number) => void,
+): Promise<void> {
+  const entry = workerEntry ?? defaultWorkerEntry();
+  const chunkSize = Math.max(1, Math.min(32, Math.ceil(items.length / (count * 8))));
+  const chunks: number[][] = [];
+  for (let i = 0; i < items.length; i += chunkSize) chunks.push(items.slice(i, i + chunkSize));
+  let next = 0;
+  let done = 0;
+
+  await new Promise<void>((resolve, reject) => {
+    let live = count;
+    let failed = false;
+    const pool: Worker[] = [];
+    const fail = (err: Error) => {
+      if (failed) return;
+      failed = true;
+      for (const w of pool) void w.terminate();
+      reject(err);
+    };
+    for (let w = 0; w < count; w++) {
+      const worker = new Worker(entry.url, {
+        workerData: { ...entry.data, suite },
+        execArgv: entry.execArgv,
+      });
+      pool.push(worker);
+      const feed = () => {
+        if (next < chunks.length) {
+          const id = next++;
+          worker.postMessage({ type: "chunk", id, items: chunks[id] });
+        } else {
+          worker.postMessage({ type: "close" });
+        }
+      };
+      worker.on("message", (msg: { type: string; id: number; metrics?: RunMetrics[]; error?: string }) => {
+        if (msg.type === "failed") return fail(new Error(`worker failed: ${msg.error}`));
+        const chunk = chunks[msg.id];
+        chunk.forEach((item, j) => metrics.set(item, msg.metrics![j]));
+        done += chunk.length;
+        progress(done, items.length);
+        feed();
+      });
+      worker.on("error", (err) => fail(err));
+      worker.on("exit", () => {
+        live--;
+        if (live === 0 && !failed) {
+          if (metrics.size === items.length) resolve();
+          else fail(new Error(`workers exited with ${items.length - metrics.size} runs unfinished`));
+        }
+      });
+      feed();
+    }
+  });
+}
+
+function assemble(
+  suite: SuiteSpec,
+  batch: RunBatch,
+  items: readonly number[],
+  metrics: Map<number, RunMetrics>,
+): CaseResult[] {
+  const byCase = new Map<number, RunMetrics[]>();
+  for (const item of [...items].sort((a, b) => a - b)) {
+    const [ci] = batch.locate(item);
+    let runs = byCase.get(ci);
+    if (runs === undefined) byCase.set(ci, (runs = []));
+    runs.push(metrics.get(item)!);
+  }
+  return [...byCase.entries()].sort(([a], [b]) => a - b).map(([ci, runs]) => ({ case: suite.cases[ci], runs }));
+}
