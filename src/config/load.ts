@@ -3,7 +3,8 @@
  * turn every problem into one clear message naming the file, the field, the bad value and the expected
  * form. Pure: takes the text and the file's name, reads nothing itself.
  */
-import { Ajv, type ErrorObject } from "ajv";
+import { Ajv2020 } from "ajv/dist/2020.js";
+import type { ErrorObject } from "ajv";
 import { parse as parseYaml, YAMLParseError } from "yaml";
 import { InputError, quote } from "../core/errors.js";
 import type { HyperValue } from "../core/types.js";
@@ -46,11 +47,10 @@ export interface SuiteConfig {
   checks?: Record<string, unknown>;
 }
 
-let validator: ReturnType<Ajv["compile"]> | null = null;
+let validator: ReturnType<Ajv2020["compile"]> | null = null;
 function validate(data: unknown): { ok: boolean; errors: ErrorObject[] } {
   if (validator === null) {
-    const ajv = new Ajv({ allErrors: true, useDefaults: true, strict: true, allowUnionTypes: true });
-    ajv.addKeyword("description");
+    const ajv = new Ajv2020({ allErrors: true, verbose: true, useDefaults: true, strict: true, allowUnionTypes: true });
     validator = ajv.compile(configSchema);
   }
   const ok = validator(data) as boolean;
@@ -62,7 +62,7 @@ export function parseConfig(text: string, file: string): SuiteConfig {
   const where = `config ${file}`;
   let data: unknown;
   try {
-    data = /\.json$/i.test(file) ? JSON.parse(text) : parseYaml(text, { prettyErrors: false });
+    data = /\.json$/i.test(file) ? JSON.parse(text) : parseYaml(text);
   } catch (err) {
     if (err instanceof YAMLParseError) {
       const pos = err.linePos?.[0];

@@ -1,0 +1,6 @@
+/** The schemas that ship as files in schema/, each with the object the code validates with. */
+import { configSchema } from "../src/config/schema.js";
+
+export const SHIPPED_SCHEMAS: readonly { file: string; schema: unknown }[] = [
+  { file: "schema/gradgate.schema.json", schema: configSchema },
+];
