@@ -4,7 +4,7 @@
  */
 import { InputError, quote } from "../core/errors.js";
 import type { OptimizerFactory } from "../core/types.js";
-import { OPTIMIZERS, getOptimizer } from "../optimizers/index.js";
+import { OPTIMIZERS, type ReferenceOptimizerFactory, getOptimizer } from "../optimizers/index.js";
 
 export interface LoadedOptimizer {
   readonly factory: OptimizerFactory;
@@ -18,7 +18,7 @@ export function canonicalUse(use: string): string {
 }
 
 /** Synchronous lookup for reference optimizers (also used while resolving a suite). */
-export function referenceFactory(use: string, where: string): OptimizerFactory {
+export function referenceFactory(use: string, where: string): ReferenceOptimizerFactory {
   const canonical = canonicalUse(use);
   const [kind, name] = splitUse(canonical);
   if (kind !== "reference") {
