@@ -16,21 +16,29 @@ export interface RunSuiteOptions {
   readonly items?: readonly number[];
 }
 
+interface WorkerEntry {
+  /** A file URL, or (eval) the source of a small bootstrap script. */
+  readonly script: URL | string;
+  readonly eval: boolean;
+  readonly data: Record<string, unknown>;
+}
+
 /** Where the worker script lives; a bundle may point this at itself (see setWorkerEntry). */
-let workerEntry: { url: URL; execArgv: string[]; data: Record<string, unknown> } | null = null;
+let workerEntry: WorkerEntry | null = null;
 
 /** Lets a bundled entry point run workers from its own file, marking them with `data`. */
 export function setWorkerEntry(url: URL, data: Record<string, unknown> = {}): void {
-  workerEntry = { url, execArgv: [], data };
+  workerEntry = { script: url, eval: false, data };
 }
 
-function defaultWorkerEntry() {
+function defaultWorkerEntry(): WorkerEntry {
   const here = new URL(import.meta.url);
-  const ts = here.pathname.endsWith(".ts");
+  if (!here.pathname.endsWith(".ts")) return { script: new URL("./worker.js", here), eval: false, data: {} };
+  // Sources (development, tests) run through tsx: register its loader in the worker, then load worker.ts.
+  const target = JSON.stringify(new URL("./worker.ts", here).href);
   return {
-    url: new URL(ts ? "./worker.ts" : "./worker.js", here),
-    // Sources run through tsx in development and tests; the build runs plain JavaScript.
-    execArgv: ts ? ["--import", "tsx"] : [],
+    script: `import("tsx/esm/api").then((m) => { m.register(); return import(${target}); });`,
+    eval: true,
     data: {},
   };
 }
@@ -80,10 +88,7 @@ async function runOnWorkers(
       reject(err);
     };
     for (let w = 0; w < count; w++) {
-      const worker = new Worker(entry.url, {
-        workerData: { ...entry.data, suite },
-        execArgv: entry.execArgv,
-      });
+      const worker = new Worker(entry.script, { eval: entry.eval, workerData: { ...entry.data, suite } });
       pool.push(worker);
       const feed = () => {
         if (next < chunks.length) {
