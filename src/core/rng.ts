@@ -20,31 +20,31 @@ const MUL_HI = 0x5851f42d;
 const MUL_LO = 0x4c957f2d;
 
 export class Pcg32 {
-  private hi = 0;
-  private lo = 0;
-  private incHi = 0;
-  private incLo = 1;
-  private spareNormal = 0;
+  // State in typed arrays: uint32 halves above 2^31 and doubles then live unboxed, so a draw never
+  // allocates (object fields holding such numbers may be boxed by the engine).
+  /** [state hi, state lo, increment hi, increment lo] */
+  private readonly s = new Uint32Array(4);
+  private readonly spare = new Float64Array(1);
   private hasSpare = false;
 
   /** `pcg32_srandom_r(initstate, initseq)` of the reference implementation. */
   constructor(initState: bigint, initSeq: bigint) {
     const inc = ((initSeq << 1n) | 1n) & MASK64;
-    this.incHi = Number(inc >> 32n);
-    this.incLo = Number(inc & 0xffffffffn);
-    this.hi = 0;
-    this.lo = 0;
+    const st = this.s;
+    st[2] = Number(inc >> 32n);
+    st[3] = Number(inc & 0xffffffffn);
     this.advance();
-    const s = ((BigInt(this.hi) << 32n) | BigInt(this.lo)) + (initState & MASK64);
-    this.hi = Number((s >> 32n) & 0xffffffffn);
-    this.lo = Number(s & 0xffffffffn);
+    const s = ((BigInt(st[0]) << 32n) | BigInt(st[1])) + (initState & MASK64);
+    st[0] = Number((s >> 32n) & 0xffffffffn);
+    st[1] = Number(s & 0xffffffffn);
     this.advance();
   }
 
   /** state ← state·MUL + inc (mod 2⁶⁴), on 32-bit halves with 16-bit limbs for the low product. */
   private advance(): void {
-    const lo = this.lo;
-    const hi = this.hi;
+    const st = this.s;
+    const hi = st[0];
+    const lo = st[1];
     const a0 = lo & 0xffff;
     const a1 = lo >>> 16;
     const b0 = MUL_LO & 0xffff;
@@ -57,15 +57,15 @@ export class Pcg32 {
     const prodLo = (((mid & 0xffff) << 16) | (p00 & 0xffff)) >>> 0;
     const prodHi = p11 + (p01 >>> 16) + (p10 >>> 16) + (mid >>> 16);
     const newHi = prodHi + Math.imul(hi, MUL_LO) + Math.imul(lo, MUL_HI);
-    const sumLo = prodLo + this.incLo;
-    this.lo = sumLo >>> 0;
-    this.hi = (newHi + this.incHi + (sumLo > 0xffffffff ? 1 : 0)) >>> 0;
+    const sumLo = prodLo + st[3];
+    st[1] = sumLo >>> 0;
+    st[0] = (newHi + st[2] + (sumLo > 0xffffffff ? 1 : 0)) >>> 0;
   }
 
   /** Next uniformly distributed uint32 (`pcg32_random_r`). */
   nextU32(): number {
-    const hi = this.hi;
-    const lo = this.lo;
+    const hi = this.s[0];
+    const lo = this.s[1];
     this.advance();
     const xhi = hi ^ (hi >>> 18);
     const xlo = lo ^ ((lo >>> 18) | (hi << 14));
@@ -100,7 +100,7 @@ export class Pcg32 {
   nextNormal(): number {
     if (this.hasSpare) {
       this.hasSpare = false;
-      return this.spareNormal;
+      return this.spare[0];
     }
     let u = 0;
     let v = 0;
@@ -111,7 +111,7 @@ export class Pcg32 {
       s = u * u + v * v;
     } while (s >= 1 || s === 0);
     const m = Math.sqrt((-2 * Math.log(s)) / s);
-    this.spareNormal = v * m;
+    this.spare[0] = v * m;
     this.hasSpare = true;
     return u * m;
   }

@@ -27,19 +27,20 @@ class HarnessOracle implements Oracle {
   ) {}
 
   evaluate(x: Float64Array, grad: Float64Array): number {
-    if (x.length !== this.iterate.length || grad.length !== this.iterate.length) {
-      throw new RangeError(
-        `evaluate: point and gradient must have length ${this.iterate.length}, got ${x.length} and ${grad.length}`,
-      );
-    }
+    const n = this.iterate.length;
+    if (x.length !== n || grad.length !== n) throw lengthError(n, x, grad);
     this.evaluations++;
     const f = this.problem.evaluate(x, grad);
-    if (!this.captured && x === this.iterate) {
+    if (x === this.iterate && !this.captured) {
       this.captured = true;
       this.capturedValue = this.before === null || sameValues(x, this.before) ? f : NaN;
     }
     return f;
   }
+}
+
+function lengthError(n: number, x: Float64Array, grad: Float64Array): RangeError {
+  return new RangeError(`evaluate: point and gradient must have length ${n}, got ${x.length} and ${grad.length}`);
 }
 
 function sameValues(a: Float64Array, b: Float64Array): boolean {
@@ -54,6 +55,14 @@ export interface ExecuteOptions {
   readonly scratch?: Float64Array;
   /** Clock for the wall-time budget, in milliseconds. */
   readonly now?: () => number;
+  /**
+   * Scenario hook (src/runner/scenarios.ts), called before each step k with the current instance: may
+   * act on it (a learning-rate change) or return a replacement (a resume). If it throws, the run ends
+   * with stop "error" and the exception's message as `error`.
+   */
+  readonly beforeStep?: (step: number, optimizer: Optimizer) => Optimizer | void;
+  /** Scenario observer of each iterate x_k, right after step k. */
+  readonly afterStep?: (step: number, x: Float64Array) => void;
 }
 
 /** Runs one case with one seed and returns its metrics. Never throws for optimizer faults. */
@@ -99,8 +108,17 @@ export function executeRun(
   let reuse = false;
   let evalsBefore = 0;
   let stop: StopReason = "steps";
+  const keep = spec.fingerprintSteps;
 
+  const { beforeStep, afterStep } = options;
   for (let k = 1; k <= maxSteps; k++) {
+    if (beforeStep !== undefined) {
+      try {
+        optimizer = beforeStep(k, optimizer) ?? optimizer;
+      } catch (err) {
+        return done("error", oracle.evaluations, message(err));
+      }
+    }
     if (before !== null) before.set(x);
     oracle.captured = false;
     try {
@@ -108,8 +126,8 @@ export function executeRun(
     } catch (err) {
       return done("error", oracle.evaluations, `step ${k} threw: ${message(err)}`);
     }
-    if (x.length !== dim) return done("error", oracle.evaluations, `step ${k} changed the dimension`);
-    recorder.keepIterate(k, x);
+    if (k <= keep) recorder.keepIterate(k, x);
+    afterStep?.(k, x);
 
     let verdict: StopReason | null = null;
     if (stochastic) {

@@ -1,0 +1,197 @@
+// Engine benchmark: every figure is measured side by side in this one run, on the compiled build.
+// Run: npm run bench (builds first). Prints a table and, last, one line of JSON.
+//  1. runner overhead: the harness's run loop against a hand-written loop of the same optimizer and
+//     problem (same instance types, same steps), alternated, median of repeated ratios;
+//  2. worker speedup: the default suite on 1 and on 2 worker threads (results checked identical);
+//  3. the default suite end to end through the CLI (a fresh node process, as a user runs it);
+//  4. extended Rosenbrock at n = 10^6: heap growth per step of the run loop with Adam.
+import { execFileSync } from "node:child_process";
+import { fileURLToPath } from "node:url";
+import { canonicalJson } from "../build/core/json.js";
+import { Pcg32 } from "../build/core/rng.js";
+import { parseConfig } from "../build/config/load.js";
+import { DEFAULT_SUITE_YAML } from "../build/config/default-suite.js";
+import { getOptimizer, resolveHyper } from "../build/optimizers/index.js";
+import { getProblem, problemKey, resolveProblemParams } from "../build/problems/index.js";
+import { executeRun } from "../build/runner/execute.js";
+import { logCheckpoints } from "../build/runner/recorder.js";
+import { runSuite } from "../build/runner/pool.js";
+import { resolveSuite } from "../build/runner/suite.js";
+
+const median = (a) => {
+  const s = [...a].sort((x, y) => x - y);
+  return s.length % 2 ? s[s.length >> 1] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
+};
+
+function caseFor(problemName, params, optimizerName, hyper, steps) {
+  const def = getProblem(problemName);
+  const p = resolveProblemParams(def, params, "bench");
+  const inst = def.create(p, { noise: new Pcg32(0n, 0n) });
+  const factory = getOptimizer(optimizerName);
+  return {
+    def,
+    factory,
+    spec: {
+      id: `${optimizerName}/default/${problemKey(def, p)}`,
+      optimizer: optimizerName,
+      use: `reference:${optimizerName}`,
+      set: "default",
+      hyper: resolveHyper(factory, hyper, "bench"),
+      problem: def.name,
+      problemKey: problemKey(def, p),
+      params: p,
+      dim: inst.dim,
+      fStar: inst.fStar,
+      fStarKind: inst.fStarKind,
+      budget: { steps, evaluations: 0, seconds: 1e9 },
+      stopAt: 0,
+      ladder: [1e-1, 1e-2, 1e-3, 1e-4, 1e-6, 1e-8],
+      blowUp: 1e6,
+      checkpoints: logCheckpoints(steps),
+      fingerprintSteps: 0,
+      seeds: 1,
+      measureEvery: 1,
+    },
+  };
+}
+
+/** The loop a maintainer would write by hand: evaluate, record f, check it, step. */
+function handLoop({ def, factory, spec }) {
+  const problem = def.create(spec.params, { noise: new Pcg32(1n, 2n) });
+  const x = new Float64Array(problem.dim);
+  problem.start(x, new Pcg32(1n, 1n));
+  const opt = factory.create(spec.hyper, problem.dim);
+  const fs = new Float64Array(spec.budget.steps + 1);
+  let last = 0;
+  let atIterate = false;
+  const oracle = {
+    evaluate(p, g) {
+      const f = problem.evaluate(p, g);
+      if (p === x && !atIterate) {
+        atIterate = true;
+        last = f;
+      }
+      return f;
+    },
+  };
+  // f(x_k) is what convergence is judged on: taken from the step when the optimizer evaluates at the
+  // iterate (known after the next step), else evaluated explicitly (look-ahead methods).
+  for (let k = 1; k <= spec.budget.steps; k++) {
+    atIterate = false;
+    opt.step(x, oracle);
+    if (atIterate) fs[k - 1] = last;
+    else fs[k] = last = problem.objective(x);
+    if (!Number.isFinite(last)) break;
+  }
+  return fs[spec.budget.steps - 1];
+}
+
+function time(fn) {
+  const t = performance.now();
+  fn();
+  return performance.now() - t;
+}
+
+function overhead(name, c, reps) {
+  let scratch;
+  const runner = () => {
+    const r = executeRun(c.spec, 0, 1, c.factory, c.def, { scratch });
+    scratch = r.scratch;
+  };
+  for (let i = 0; i < 3; i++) {
+    runner();
+    handLoop(c);
+  }
+  const ratios = [];
+  const hand = [];
+  const harness = [];
+  for (let i = 0; i < reps; i++) {
+    const a = time(() => handLoop(c));
+    const b = time(runner);
+    hand.push(a);
+    harness.push(b);
+    ratios.push(b / a);
+  }
+  return { name, handMs: median(hand), runnerMs: median(harness), ratio: median(ratios) };
+}
+
+const out = {};
+const rows = [];
+
+// 1. Overhead.
+const cases = [
+  ["adam on quadratic (n=10, κ=100)", caseFor("quadratic", {}, "adam", { lr: 0.03 }, 20000)],
+  ["adam on extended-rosenbrock (n=1000)", caseFor("extended-rosenbrock", { n: 1000 }, "adam", { lr: 0.01 }, 2000)],
+  ["nesterov on quadratic (n=10, κ=100)", caseFor("quadratic", {}, "nesterov", { lr: 0.001, momentum: 0.9 }, 20000)],
+  ["sgd on rosenbrock (n=2)", caseFor("rosenbrock", {}, "sgd", { lr: 0.001 }, 100000)],
+];
+out.overhead = {};
+for (const [name, c] of cases) {
+  const r = overhead(name, c, 15);
+  out.overhead[name] = r.ratio;
+  rows.push([`overhead: ${name}`, `hand ${r.handMs.toFixed(2)} ms, runner ${r.runnerMs.toFixed(2)} ms`, `ratio ${r.ratio.toFixed(3)}`]);
+}
+
+// 2. Worker speedup on the default suite (in-process, after a warm-up run).
+const suite = resolveSuite(parseConfig(DEFAULT_SUITE_YAML, "default"), "default");
+await runSuite(suite, { workers: 1 });
+const w1 = [];
+const w2 = [];
+let same = true;
+let reference;
+for (let i = 0; i < 3; i++) {
+  let t = performance.now();
+  const a = await runSuite(suite, { workers: 1 });
+  w1.push(performance.now() - t);
+  t = performance.now();
+  const b = await runSuite(suite, { workers: 2 });
+  w2.push(performance.now() - t);
+  reference ??= canonicalJson(a);
+  same &&= canonicalJson(a) === reference && canonicalJson(b) === reference;
+}
+out.workers = { oneMs: median(w1), twoMs: median(w2), speedup: median(w1) / median(w2), identical: same };
+rows.push(["default suite, 1 worker", `${median(w1).toFixed(0)} ms`, ""]);
+rows.push(["default suite, 2 workers", `${median(w2).toFixed(0)} ms`, `speedup ${out.workers.speedup.toFixed(2)}, identical: ${same}`]);
+
+// 3. End to end through the CLI, in a fresh process (2 workers).
+const bin = fileURLToPath(new URL("../bin/gradgate.js", import.meta.url));
+const e2e = [];
+for (let i = 0; i < 3; i++) {
+  const t = performance.now();
+  execFileSync(process.execPath, [bin, "run", "--quiet", "--workers", "2", "--out", "/tmp/gradgate-bench-results.json"], {
+    cwd: "/tmp",
+    stdio: "ignore",
+  });
+  e2e.push(performance.now() - t);
+}
+out.endToEndSeconds = median(e2e) / 1000;
+rows.push(["default suite end to end (CLI, 2 workers)", `${out.endToEndSeconds.toFixed(2)} s`, "target ≤ 5 s"]);
+
+// 4. Heap growth per step at n = 10^6.
+{
+  const c = caseFor("extended-rosenbrock", { n: 1_000_000 }, "adam", { lr: 0.001 }, 40);
+  const gc = globalThis.gc;
+  const short = { ...c.spec, budget: { ...c.spec.budget, steps: 5 }, checkpoints: logCheckpoints(5) };
+  executeRun(short, 0, 1, c.factory, c.def); // warm up
+  gc?.();
+  const before = process.memoryUsage().heapUsed;
+  let peak = before;
+  const probe = setInterval(() => (peak = Math.max(peak, process.memoryUsage().heapUsed)), 1);
+  const t = performance.now();
+  executeRun(c.spec, 0, 1, c.factory, c.def);
+  const ms = performance.now() - t;
+  clearInterval(probe);
+  peak = Math.max(peak, process.memoryUsage().heapUsed);
+  const perStep = (peak - before) / c.spec.budget.steps;
+  out.largeScale = { n: 1_000_000, steps: c.spec.budget.steps, ms, heapGrowthBytes: peak - before, heapGrowthPerStepBytes: perStep, gcExposed: gc !== undefined };
+  rows.push([
+    "extended-rosenbrock n=1e6, adam, 40 steps",
+    `${ms.toFixed(0)} ms`,
+    `heap growth ${((peak - before) / 1024).toFixed(0)} KiB (${perStep.toFixed(0)} B/step; an iterate is 7812 KiB)`,
+  ]);
+}
+
+const w = rows.reduce((m, r) => Math.max(m, r[0].length), 0);
+const w2c = rows.reduce((m, r) => Math.max(m, r[1].length), 0);
+for (const r of rows) console.log(`${r[0].padEnd(w)}  ${r[1].padEnd(w2c)}  ${r[2]}`);
+console.log(JSON.stringify(out));
