@@ -3,6 +3,8 @@
  * queue (so a slow case does not hold up a worker's share) and put back in item order, so the results
  * are identical whatever the number of workers.
  */
+import { createRequire } from "node:module";
+import { pathToFileURL } from "node:url";
 import { Worker } from "node:worker_threads";
 import { RunBatch } from "./batch.js";
 import type { CaseResult, RunMetrics, SuiteSpec } from "./types.js";
@@ -36,8 +38,16 @@ function defaultWorkerEntry(): WorkerEntry {
   if (!here.pathname.endsWith(".ts")) return { script: new URL("./worker.js", here), eval: false, data: {} };
   // Sources (development, tests) run through tsx: register its loader in the worker, then load worker.ts.
   const target = JSON.stringify(new URL("./worker.ts", here).href);
+  // Resolved from this file, not from the working directory, so sources run from anywhere.
+  const tsx = JSON.stringify(
+    pathToFileURL(
+      createRequire(here)
+        .resolve("tsx/esm/api")
+        .replace(/\.cjs$/, ".mjs"),
+    ).href,
+  );
   return {
-    script: `import("tsx/esm/api").then((m) => { m.register(); return import(${target}); });`,
+    script: `import(${tsx}).then((m) => { m.register(); return import(${target}); });`,
     eval: true,
     data: {},
   };
@@ -132,5 +142,7 @@ function assemble(
     if (runs === undefined) byCase.set(ci, (runs = []));
     runs.push(metrics.get(item)!);
   }
-  return [...byCase.entries()].sort(([a], [b]) => a - b).map(([ci, runs]) => ({ case: suite.cases[ci], runs }));
+  return [...byCase.entries()]
+    .sort(([a], [b]) => a - b)
+    .map(([ci, runs]) => ({ case: suite.cases[ci], runs }));
 }
