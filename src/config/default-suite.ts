@@ -5,7 +5,9 @@
  * benchmark run. Behaviours covered: ill-conditioned quadratics (κ = 10, 100, 10⁴), curved valleys
  * (Rosenbrock, helical valley, Wood), bad scaling (Powell, Brown: per-parameter step sizes), a local
  * basin (Freudenstein–Roth), a saddle, a plateau, stochastic gradients (noisy quadratic, mini-batch
- * logistic regression and a two-layer network) and rare features (sparse least squares).
+ * logistic regression and a two-layer network) and rare features (sparse least squares). Extra sets
+ * expose what only shows under specific conditions: AMSGrad (its running maximum) and a large ε (where
+ * ε sits relative to the square root and the bias correction).
  */
 export const DEFAULT_SUITE_YAML = `# gradgate default suite
 version: 1
@@ -21,7 +23,12 @@ optimizers:
     hyper: { momentum: 0.9 }
   - name: adagrad
   - name: rmsprop
+    sets:
+      large-eps: { eps: 0.0001 }
   - name: adam
+    sets:
+      amsgrad: { amsgrad: true }
+      large-eps: { eps: 0.01 }
   - name: adamw
 problems:
   - use: quadratic
