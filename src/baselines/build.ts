@@ -25,8 +25,8 @@ export function inProcessRuntime(node: string): string {
 
 /**
  * One baseline file per optimizer, in the order the optimizers first appear in the results.
- * `extraRuns` holds the runs of the extra seeds by case id (iterates are dropped: the fingerprint uses
- * the suite's own seeds).
+ * `extraRuns` holds the runs of the extra seeds by case id (iterates and trace are dropped: the
+ * fingerprint and the charts use the suite's own seeds).
  */
 export function buildBaselineFiles(
   results: ResultsDocument,
@@ -35,7 +35,7 @@ export function buildBaselineFiles(
 ): BaselineFile[] {
   if (results.shard) {
     throw new InputError(
-      `results hold shard ${results.shard.index + 1} of ${results.shard.count} only; merge the shards before rebaselining`,
+      `results hold shard ${results.shard.index} of ${results.shard.count} only; merge the shards before rebaselining`,
     );
   }
   const byOptimizer = new Map<string, BaselineCase[]>();
@@ -72,9 +72,9 @@ export function buildBaselineFiles(
   });
 }
 
+/** Extra seeds serve the statistics only: their iterates and trace are not kept (smaller files). */
 function stripIterates(run: RunMetrics): RunMetrics {
-  if (run.iterates === undefined) return run;
-  const copy: Record<string, unknown> = { ...run };
+  const copy: Record<string, unknown> = { ...run, trace: [] };
   delete copy.iterates;
   return copy as unknown as RunMetrics;
 }

@@ -99,7 +99,7 @@ export async function rebaselineCommand(host: Host, args: RebaselineArgs): Promi
   const results = readResults(host, args.results);
   if (results.shard) {
     throw new InputError(
-      `rebaseline: results ${args.results} hold shard ${results.shard.index + 1} of ${results.shard.count} only; ` +
+      `rebaseline: results ${args.results} hold shard ${results.shard.index} of ${results.shard.count} only; ` +
         `merge the shards first (gradgate merge)`,
     );
   }

@@ -514,7 +514,7 @@ export const configSchema = {
       description: "First iterates kept per run, to tell whether the arithmetic itself changed.",
       properties: {
         steps: { type: "integer", minimum: 0, maximum: 1000, default: 20 },
-        maxDim: { type: "integer", minimum: 0, default: 10, description: "Only problems up to this dimension." },
+        maxDim: { type: "integer", minimum: 0, default: 4, description: "Only problems up to this dimension." },
       },
     },
     optimizers: {

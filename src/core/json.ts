@@ -1,10 +1,33 @@
 /**
  * Canonical JSON: object keys sorted, arrays in order, numbers in JavaScript's shortest round-trip
- * form, two-space indentation and a final newline. The same value always gives the same bytes, so
- * results and baselines diff cleanly and equal runs compare byte for byte.
+ * form, two-space indentation and a final newline; an array of plain values (numbers, strings, null,
+ * booleans) stays on one line, so a run's trace or iterate is one line of a diff. The same value always
+ * gives the same bytes, so results and baselines diff cleanly and equal runs compare byte for byte.
  */
 export function canonicalJson(value: unknown): string {
-  return JSON.stringify(sortKeys(value), null, 2) + "\n";
+  return write(sortKeys(value), "") + "\n";
+}
+
+function isPlain(v: unknown): boolean {
+  return v === null || typeof v !== "object";
+}
+
+function write(value: unknown, indent: string): string {
+  if (Array.isArray(value)) {
+    if (value.length === 0) return "[]";
+    if (value.every(isPlain)) return "[" + value.map((v) => JSON.stringify(v)).join(", ") + "]";
+    const inner = indent + "  ";
+    return "[\n" + value.map((v) => inner + write(v, inner)).join(",\n") + "\n" + indent + "]";
+  }
+  if (value !== null && typeof value === "object") {
+    const entries = Object.entries(value as Record<string, unknown>);
+    if (entries.length === 0) return "{}";
+    const inner = indent + "  ";
+    return (
+      "{\n" + entries.map(([k, v]) => inner + JSON.stringify(k) + ": " + write(v, inner)).join(",\n") + "\n" + indent + "}"
+    );
+  }
+  return JSON.stringify(value);
 }
 
 function sortKeys(value: unknown): unknown {

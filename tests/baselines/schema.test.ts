@@ -85,7 +85,7 @@ describe("baseline schema", () => {
 
   it("accepts baselines built from what the real runner produces, and reads them back unchanged", async () => {
     const config = parseConfig(
-      "seeds: 2\nbudget: { steps: 60 }\noptimizers: [{ name: sgd }, { name: adam }]\nproblems: [{ use: quadratic }, { use: rosenbrock }]\n",
+      "seeds: 2\nbudget: { steps: 60 }\noptimizers: [{ name: sgd }, { name: adam }]\nproblems: [{ use: rosenbrock }, { use: quadratic }]\n",
       "inline.yml",
     );
     const suite = resolveSuite(config, "inline.yml");
@@ -99,6 +99,7 @@ describe("baseline schema", () => {
       expect(canonicalJson(back)).toBe(text);
       expect(back.cases[0].runs[0].iterates?.length).toBeGreaterThan(0);
       expect(back.cases[0].extraRuns[0].iterates).toBeUndefined();
+      expect(back.cases[0].extraRuns[0].trace).toEqual([]);
     }
   });
 });

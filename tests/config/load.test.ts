@@ -30,7 +30,7 @@ describe("parseConfig", () => {
       ladder: [1e-1, 1e-2, 1e-3, 1e-4, 1e-6, 1e-8],
       stopAt: 1e-12,
       blowUp: 1e6,
-      fingerprint: { steps: 20, maxDim: 10 },
+      fingerprint: { steps: 20, maxDim: 4 },
     });
   });
 
