@@ -53,15 +53,16 @@ async function withBaselines(config: Record<string, unknown> = { extraSeeds: { p
 }
 
 describe("gradgate compare", () => {
-  it("exits 2 with a clear message when there are no baselines or no results", async () => {
+  it("treats every case as new before the first baselines, and exits 2 when results are missing", async () => {
     const cwd = tempDir();
     writeConfig(cwd);
     writeResults(cwd, "r.json", doc(1));
-    expect(await cli(cwd, "compare", "--results", "r.json")).toEqual({
-      code: 2,
-      out: "",
-      err: 'gradgate: compare: no baselines in baselines/; create them with gradgate rebaseline --results r.json --reason "first baselines"\n',
-    });
+    const first = await cli(cwd, "compare", "--results", "r.json");
+    expect(first.err).toBe(
+      'gradgate: no baselines in baselines/ yet: every case is new; create them with gradgate rebaseline --results r.json --reason "first baselines"\n',
+    );
+    expect(first.out).toMatch(/\n2 cases: 2 new\ngate: PASS\n$/);
+    expect(first.code).toBe(0);
     expect((await cli(cwd, "compare")).err).toBe(
       "gradgate: compare: --results FILE is required (the file gradgate run wrote, e.g. .gradgate/results.json)\n",
     );
