@@ -38,7 +38,7 @@ function scenario(kind: "unchanged" | "mixed" | "worst") {
         runs: b.map((r) => ({
           ...r,
           finalGap: (r.finalGap ?? 0) * (1 + 1e-15),
-          iterates: r.iterates?.map((x) => x.map((v) => v * (1 + 1e-16))),
+          iterates: r.iterates?.map((x) => x.map((v) => (v === null ? v : v * (1 + 1e-16)))),
         })),
       });
     } else {

@@ -121,15 +121,25 @@ const rows = [];
 // 1. Overhead.
 const cases = [
   ["adam on quadratic (n=10, κ=100)", caseFor("quadratic", {}, "adam", { lr: 0.03 }, 20000)],
-  ["adam on extended-rosenbrock (n=1000)", caseFor("extended-rosenbrock", { n: 1000 }, "adam", { lr: 0.01 }, 2000)],
-  ["nesterov on quadratic (n=10, κ=100)", caseFor("quadratic", {}, "nesterov", { lr: 0.001, momentum: 0.9 }, 20000)],
+  [
+    "adam on extended-rosenbrock (n=1000)",
+    caseFor("extended-rosenbrock", { n: 1000 }, "adam", { lr: 0.01 }, 2000),
+  ],
+  [
+    "nesterov on quadratic (n=10, κ=100)",
+    caseFor("quadratic", {}, "nesterov", { lr: 0.001, momentum: 0.9 }, 20000),
+  ],
   ["sgd on rosenbrock (n=2)", caseFor("rosenbrock", {}, "sgd", { lr: 0.001 }, 100000)],
 ];
 out.overhead = {};
 for (const [name, c] of cases) {
   const r = overhead(name, c, 15);
   out.overhead[name] = r.ratio;
-  rows.push([`overhead: ${name}`, `hand ${r.handMs.toFixed(2)} ms, runner ${r.runnerMs.toFixed(2)} ms`, `ratio ${r.ratio.toFixed(3)}`]);
+  rows.push([
+    `overhead: ${name}`,
+    `hand ${r.handMs.toFixed(2)} ms, runner ${r.runnerMs.toFixed(2)} ms`,
+    `ratio ${r.ratio.toFixed(3)}`,
+  ]);
 }
 
 // 2. Worker speedup on the default suite (in-process, after a warm-up run).
@@ -151,21 +161,33 @@ for (let i = 0; i < 3; i++) {
 }
 out.workers = { oneMs: median(w1), twoMs: median(w2), speedup: median(w1) / median(w2), identical: same };
 rows.push(["default suite, 1 worker", `${median(w1).toFixed(0)} ms`, ""]);
-rows.push(["default suite, 2 workers", `${median(w2).toFixed(0)} ms`, `speedup ${out.workers.speedup.toFixed(2)}, identical: ${same}`]);
+rows.push([
+  "default suite, 2 workers",
+  `${median(w2).toFixed(0)} ms`,
+  `speedup ${out.workers.speedup.toFixed(2)}, identical: ${same}`,
+]);
 
 // 3. End to end through the CLI, in a fresh process (2 workers).
 const bin = fileURLToPath(new URL("../bin/gradgate.js", import.meta.url));
 const e2e = [];
 for (let i = 0; i < 3; i++) {
   const t = performance.now();
-  execFileSync(process.execPath, [bin, "run", "--quiet", "--workers", "2", "--out", "/tmp/gradgate-bench-results.json"], {
-    cwd: "/tmp",
-    stdio: "ignore",
-  });
+  execFileSync(
+    process.execPath,
+    [bin, "run", "--quiet", "--workers", "2", "--out", "/tmp/gradgate-bench-results.json"],
+    {
+      cwd: "/tmp",
+      stdio: "ignore",
+    },
+  );
   e2e.push(performance.now() - t);
 }
 out.endToEndSeconds = median(e2e) / 1000;
-rows.push(["default suite end to end (CLI, 2 workers)", `${out.endToEndSeconds.toFixed(2)} s`, "target ≤ 5 s"]);
+rows.push([
+  "default suite end to end (CLI, 2 workers)",
+  `${out.endToEndSeconds.toFixed(2)} s`,
+  "target ≤ 5 s",
+]);
 
 // 4. Heap growth per step at n = 10^6.
 {
@@ -183,7 +205,14 @@ rows.push(["default suite end to end (CLI, 2 workers)", `${out.endToEndSeconds.t
   clearInterval(probe);
   peak = Math.max(peak, process.memoryUsage().heapUsed);
   const perStep = (peak - before) / c.spec.budget.steps;
-  out.largeScale = { n: 1_000_000, steps: c.spec.budget.steps, ms, heapGrowthBytes: peak - before, heapGrowthPerStepBytes: perStep, gcExposed: gc !== undefined };
+  out.largeScale = {
+    n: 1_000_000,
+    steps: c.spec.budget.steps,
+    ms,
+    heapGrowthBytes: peak - before,
+    heapGrowthPerStepBytes: perStep,
+    gcExposed: gc !== undefined,
+  };
   rows.push([
     "extended-rosenbrock n=1e6, adam, 40 steps",
     `${ms.toFixed(0)} ms`,

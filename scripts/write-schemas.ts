@@ -3,13 +3,15 @@
  * objects the code validates with. tests/schemas.test.ts fails when a file here is stale.
  * Run: npm run schema
  */
-import { writeFileSync } from "node:fs";
+import { mkdirSync, writeFileSync } from "node:fs";
+import { dirname } from "node:path";
 import { fileURLToPath } from "node:url";
 import { SHIPPED_SCHEMAS } from "./schemas.js";
 
 const root = new URL("../", import.meta.url);
 for (const { file, schema } of SHIPPED_SCHEMAS) {
   const path = fileURLToPath(new URL(file, root));
+  mkdirSync(dirname(path), { recursive: true });
   writeFileSync(path, JSON.stringify(schema, null, 2) + "\n");
   console.log(`wrote ${file}`);
 }

@@ -45,7 +45,7 @@ const runSchema = {
     divergence: { type: ["string", "null"], enum: ["non-finite", "blow-up", null] },
     rate: numberOrNull,
     trace: { type: "array", items: numberOrNull },
-    iterates: { type: "array", items: { type: "array", items: { type: "number" } } },
+    iterates: { type: "array", items: { type: "array", items: { type: ["number", "null"] } } },
     error: { type: "string" },
     resume: {
       type: "object",

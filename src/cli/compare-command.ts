@@ -31,7 +31,7 @@ import type { ResultsDocument } from "../runner/results.js";
 import type { AdapterContext, CaseSpec, RunMetrics } from "../runner/types.js";
 import { textTable } from "./format.js";
 import { EXIT, type Host } from "./host.js";
-import { loadSuiteConfig } from "./run-command.js";
+import { loadPreparedSuite, loadSuiteConfig } from "./run-command.js";
 
 export const DEFAULT_BASELINES = "baselines";
 
@@ -93,7 +93,8 @@ export async function compareCommand(host: Host, args: CompareArgs): Promise<num
         `gradgate: ${plan.requested.length} inconclusive case(s); running ${plan.runs} extra seed run(s)\n`,
       );
     }
-    const extraRuns = await runPlannedSeeds(results, plan, args.workers);
+    const { suite } = await loadPreparedSuite(host, args.config);
+    const extraRuns = await runPlannedSeeds(results, plan, args.workers, suite.adapters);
     verdict = compareResults(results, baselines, {
       policy,
       extraRuns,

@@ -3,7 +3,9 @@
 /** Renders rows as a left-aligned text table (numbers right-aligned) with a header rule. */
 export function textTable(header: readonly string[], rows: readonly (readonly string[])[]): string {
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? "").length)));
-  const numeric = header.map((_, i) => rows.length > 0 && rows.every((r) => /^[-+]?[\d.,e+%x×—-]*$/i.test(r[i] ?? "")));
+  const numeric = header.map(
+    (_, i) => rows.length > 0 && rows.every((r) => /^[-+]?[\d.,e+%x×—-]*$/i.test(r[i] ?? "")),
+  );
   const line = (cells: readonly string[]) =>
     cells
       .map((c, i) => (numeric[i] ? c.padStart(widths[i]) : c.padEnd(widths[i])))

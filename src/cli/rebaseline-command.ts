@@ -33,6 +33,7 @@ import { auditDrift } from "../compare/audit-drift.js";
 import { compareResults } from "../compare/compare.js";
 import type { ExtraSeedPlan } from "../compare/extra-seeds.js";
 import { EXIT, type Host } from "./host.js";
+import { loadPreparedSuite } from "./run-command.js";
 import {
   DEFAULT_BASELINES,
   parseOptions,
@@ -150,7 +151,15 @@ export async function rebaselineCommand(host: Host, args: RebaselineArgs): Promi
   if (perCase > 0 && !args.quiet) {
     host.err(`gradgate: running ${plan.runs} extra seed run(s) (${perCase} per case) for the baselines\n`);
   }
-  const extraRuns = perCase > 0 ? await runPlannedSeeds(results, plan, args.workers) : new Map();
+  const extraRuns =
+    perCase > 0
+      ? await runPlannedSeeds(
+          results,
+          plan,
+          args.workers,
+          (await loadPreparedSuite(host, args.config)).suite.adapters,
+        )
+      : new Map();
 
   const when = (args.now ?? (() => new Date()))().toISOString();
   const commit = args.commit ?? gitHead(host.cwd);

@@ -13,7 +13,7 @@ import type { RunMetrics } from "../runner/types.js";
 import type { TrajectoryFingerprint } from "./types.js";
 
 /** r_k of one step: −1 when bitwise equal, Infinity when not comparable (NaN, lengths differ). */
-function stepDifference(x: readonly number[], y: readonly number[]): number {
+function stepDifference(x: readonly (number | null)[], y: readonly (number | null)[]): number {
   if (x.length !== y.length) return Infinity;
   let bitwise = true;
   let diff = 0;
@@ -22,11 +22,13 @@ function stepDifference(x: readonly number[], y: readonly number[]): number {
     const xi = x[i];
     const yi = y[i];
     if (xi === yi) {
-      const m = Math.abs(xi);
+      const m = xi === null ? 0 : Math.abs(xi);
       if (m > scale) scale = m;
       continue;
     }
     bitwise = false;
+    // null stands for a coordinate that left the finite range: any difference with it is unbounded.
+    if (xi === null || yi === null) return Infinity;
     const dd = Math.abs(xi - yi);
     diff = Number.isNaN(dd) ? Infinity : Math.max(diff, dd);
     scale = Math.max(scale, Math.abs(xi), Math.abs(yi));

@@ -31,6 +31,27 @@ export interface ProblemConfig {
   optimizers?: string[];
 }
 
+/** A process adapter (`adapters.NAME`), defaults filled in; paths still relative to the config file. */
+export interface ProcessAdapterConfig {
+  command: string[];
+  cwd: string;
+  env: Record<string, string>;
+  maxRuns: number;
+  maxMessageBytes: number;
+  timeouts: { start: number; message: number; run: number };
+}
+
+/** A scenario (`scenarios[i]`). */
+export interface ScenarioConfig {
+  name: string;
+  resume?: { at: number };
+  lrChange?: { at: number; lr?: number; factor?: number };
+  hyper?: Record<string, HyperValue>;
+  problem?: { use: string; params?: Record<string, number>; budget?: BudgetConfig };
+  problems?: string[];
+  optimizers?: string[];
+}
+
 /** A validated config with every default filled in. */
 export interface SuiteConfig {
   version: number;
@@ -45,12 +66,20 @@ export interface SuiteConfig {
   problems: ProblemConfig[];
   policy?: Record<string, unknown>;
   checks?: Record<string, unknown>;
+  adapters?: Record<string, ProcessAdapterConfig>;
+  scenarios?: ScenarioConfig[];
 }
 
 let validator: ReturnType<Ajv2020["compile"]> | null = null;
 function validate(data: unknown): { ok: boolean; errors: ErrorObject[] } {
   if (validator === null) {
-    const ajv = new Ajv2020({ allErrors: true, verbose: true, useDefaults: true, strict: true, allowUnionTypes: true });
+    const ajv = new Ajv2020({
+      allErrors: true,
+      verbose: true,
+      useDefaults: true,
+      strict: true,
+      allowUnionTypes: true,
+    });
     validator = ajv.compile(configSchema);
   }
   const ok = validator(data) as boolean;
@@ -66,17 +95,22 @@ export function parseConfig(text: string, file: string): SuiteConfig {
   } catch (err) {
     if (err instanceof YAMLParseError) {
       const pos = err.linePos?.[0];
-      throw new InputError(`${where}: not valid YAML${pos ? ` at line ${pos.line}, column ${pos.col}` : ""}: ${firstLine(err.message)}`);
+      throw new InputError(
+        `${where}: not valid YAML${pos ? ` at line ${pos.line}, column ${pos.col}` : ""}: ${firstLine(err.message)}`,
+      );
     }
     throw new InputError(`${where}: not valid JSON: ${firstLine((err as Error).message)}`);
   }
   if (data === null || typeof data !== "object" || Array.isArray(data)) {
-    throw new InputError(`${where}: must be a mapping with at least "optimizers" and "problems", got ${quote(data)}`);
+    throw new InputError(
+      `${where}: must be a mapping with at least "optimizers" and "problems", got ${quote(data)}`,
+    );
   }
   const { ok, errors } = validate(data);
   if (!ok) throw new InputError(describeErrors(errors, data, where));
   const config = data as SuiteConfig;
   checkCrossFields(config, where);
+  checkAdaptersAndScenarios(config, where);
   return config;
 }
 
@@ -168,7 +202,11 @@ function describeErrors(errors: ErrorObject[], data: unknown, where: string): st
 
 function knownFields(e: ErrorObject): string {
   const props = (e.parentSchema as { properties?: Record<string, unknown> } | undefined)?.properties;
-  return props ? Object.keys(props).filter((k) => k !== "$schema").join(", ") : "";
+  return props
+    ? Object.keys(props)
+        .filter((k) => k !== "$schema")
+        .join(", ")
+    : "";
 }
 
 /** Rules the schema cannot say: unique names, decreasing ladder, references to optimizer names. */
@@ -176,7 +214,9 @@ function checkCrossFields(config: SuiteConfig, where: string): void {
   const names = new Set<string>();
   config.optimizers.forEach((o, i) => {
     if (names.has(o.name)) {
-      throw new InputError(`${where}: optimizers[${i}].name ${quote(o.name)} is used twice; names must be unique`);
+      throw new InputError(
+        `${where}: optimizers[${i}].name ${quote(o.name)} is used twice; names must be unique`,
+      );
     }
     names.add(o.name);
   });
@@ -199,6 +239,59 @@ function checkCrossFields(config: SuiteConfig, where: string): void {
       if (!names.has(name)) {
         throw new InputError(
           `${where}: problems[${i}].hyper.${name} names an optimizer that is not in optimizers (known: ${[...names].join(", ")})`,
+        );
+      }
+    }
+  });
+}
+
+/** Adapter names that are spellings of `use` themselves (src/adapters/use.ts). */
+const RESERVED_ADAPTERS = ["reference", "module"];
+
+/** Rules for `adapters` and `scenarios` that the schema cannot say. */
+function checkAdaptersAndScenarios(config: SuiteConfig, where: string): void {
+  for (const name of Object.keys(config.adapters ?? {})) {
+    if (RESERVED_ADAPTERS.includes(name)) {
+      throw new InputError(
+        `${where}: adapters.${name}: "${name}" is reserved (use: ${name}:... means something else); choose another name`,
+      );
+    }
+  }
+  const optimizerNames = config.optimizers.map((o) => o.name);
+  const problemUses = config.problems.map((p) => p.use);
+  const seen = new Set<string>();
+  (config.scenarios ?? []).forEach((sc, i) => {
+    const at = `${where}: scenarios[${i}]`;
+    if (seen.has(sc.name))
+      throw new InputError(`${at}.name ${quote(sc.name)} is used twice; names must be unique`);
+    seen.add(sc.name);
+    if (!sc.resume && !sc.lrChange && !sc.hyper && !sc.problem) {
+      throw new InputError(
+        `${at} (${quote(sc.name)}) changes nothing: give resume, lrChange, hyper or problem`,
+      );
+    }
+    if (sc.resume && sc.lrChange) {
+      throw new InputError(`${at} has both resume and lrChange; make them two scenarios`);
+    }
+    if (sc.lrChange && (sc.lrChange.lr === undefined) === (sc.lrChange.factor === undefined)) {
+      throw new InputError(
+        `${at}.lrChange needs exactly one of lr (the new rate) or factor (times the case's lr)`,
+      );
+    }
+    if (sc.problem && sc.problems) {
+      throw new InputError(`${at} has both problem and problems; problem replaces the suite's problems`);
+    }
+    for (const [j, name] of (sc.optimizers ?? []).entries()) {
+      if (!optimizerNames.includes(name)) {
+        throw new InputError(
+          `${at}.optimizers[${j}] names ${quote(name)}, which is not in optimizers (known: ${optimizerNames.join(", ")})`,
+        );
+      }
+    }
+    for (const [j, use] of (sc.problems ?? []).entries()) {
+      if (!problemUses.includes(use)) {
+        throw new InputError(
+          `${at}.problems[${j}] names ${quote(use)}, which is not the use of any of problems (known: ${problemUses.join(", ")})`,
         );
       }
     }

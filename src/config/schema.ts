@@ -492,7 +492,8 @@ export const configSchema = {
       maxItems: 20,
       items: { type: "number", exclusiveMinimum: 0, exclusiveMaximum: 1 },
       default: [1e-1, 1e-2, 1e-3, 1e-4, 1e-6, 1e-8],
-      description: "Relative gap tolerances (gap / initial gap), decreasing: steps to reach each are recorded.",
+      description:
+        "Relative gap tolerances (gap / initial gap), decreasing: steps to reach each are recorded.",
     },
     stopAt: {
       type: "number",
@@ -514,7 +515,12 @@ export const configSchema = {
       description: "First iterates kept per run, to tell whether the arithmetic itself changed.",
       properties: {
         steps: { type: "integer", minimum: 0, maximum: 1000, default: 20 },
-        maxDim: { type: "integer", minimum: 0, default: 4, description: "Only problems up to this dimension." },
+        maxDim: {
+          type: "integer",
+          minimum: 0,
+          default: 4,
+          description: "Only problems up to this dimension.",
+        },
       },
     },
     optimizers: {

@@ -24,7 +24,11 @@ function write(value: unknown, indent: string): string {
     if (entries.length === 0) return "{}";
     const inner = indent + "  ";
     return (
-      "{\n" + entries.map(([k, v]) => inner + JSON.stringify(k) + ": " + write(v, inner)).join(",\n") + "\n" + indent + "}"
+      "{\n" +
+      entries.map(([k, v]) => inner + JSON.stringify(k) + ": " + write(v, inner)).join(",\n") +
+      "\n" +
+      indent +
+      "}"
     );
   }
   return JSON.stringify(value);
@@ -41,7 +45,9 @@ function sortKeys(value: unknown): unknown {
     return out;
   }
   if (typeof value === "number" && !Number.isFinite(value)) {
-    throw new TypeError(`canonicalJson: non-finite number ${value} cannot be written as JSON; store null instead`);
+    throw new TypeError(
+      `canonicalJson: non-finite number ${value} cannot be written as JSON; store null instead`,
+    );
   }
   return value;
 }

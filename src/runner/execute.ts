@@ -10,7 +10,13 @@
  * modifies x before evaluating there can never corrupt the metrics. Stochastic problems are measured
  * explicitly with the exact objective every `measureEvery` steps.
  */
-import type { Optimizer, OptimizerFactory, Oracle, ProblemDefinition, ProblemInstance } from "../core/types.js";
+import type {
+  Optimizer,
+  OptimizerFactory,
+  Oracle,
+  ProblemDefinition,
+  ProblemInstance,
+} from "../core/types.js";
 import { STREAM, deriveRunSeed, runStream, seedToHex } from "../core/rng.js";
 import { RunRecorder } from "./recorder.js";
 import type { CaseSpec, RunMetrics, StopReason } from "./types.js";
@@ -40,11 +46,14 @@ class HarnessOracle implements Oracle {
 }
 
 function lengthError(n: number, x: Float64Array, grad: Float64Array): RangeError {
-  return new RangeError(`evaluate: point and gradient must have length ${n}, got ${x.length} and ${grad.length}`);
+  return new RangeError(
+    `evaluate: point and gradient must have length ${n}, got ${x.length} and ${grad.length}`,
+  );
 }
 
 function sameValues(a: Float64Array, b: Float64Array): boolean {
-  for (let i = 0; i < a.length; i++) if (a[i] !== b[i] && !(Number.isNaN(a[i]) && Number.isNaN(b[i]))) return false;
+  for (let i = 0; i < a.length; i++)
+    if (a[i] !== b[i] && !(Number.isNaN(a[i]) && Number.isNaN(b[i]))) return false;
   return true;
 }
 
@@ -131,7 +140,8 @@ export function executeRun(
 
     let verdict: StopReason | null = null;
     if (stochastic) {
-      if (k % every === 0 || k === maxSteps) verdict = recorder.record(k, problem.objective(x), oracle.evaluations);
+      if (k % every === 0 || k === maxSteps)
+        verdict = recorder.record(k, problem.objective(x), oracle.evaluations);
     } else {
       if (k === 1) reuse = oracle.captured && !Number.isNaN(oracle.capturedValue);
       if (reuse) {
@@ -157,12 +167,14 @@ export function executeRun(
     if (maxEvals > 0 && oracle.evaluations >= maxEvals) {
       stop = "evaluations";
       if (reuse) verdict = recorder.record(k, problem.objective(x), oracle.evaluations);
-      else if (stochastic && k % every !== 0) verdict = recorder.record(k, problem.objective(x), oracle.evaluations);
+      else if (stochastic && k % every !== 0)
+        verdict = recorder.record(k, problem.objective(x), oracle.evaluations);
       return done(verdict ?? stop, oracle.evaluations);
     }
     if ((k & 63) === 0 && now() - started > seconds * 1000) {
       stop = "time";
-      if (reuse || (stochastic && k % every !== 0)) verdict = recorder.record(k, problem.objective(x), oracle.evaluations);
+      if (reuse || (stochastic && k % every !== 0))
+        verdict = recorder.record(k, problem.objective(x), oracle.evaluations);
       return done(verdict ?? stop, oracle.evaluations);
     }
   }

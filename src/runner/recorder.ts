@@ -26,7 +26,7 @@ export class RunRecorder {
   private f0 = NaN;
   private divergedAt: number | null = null;
   private divergence: DivergenceKind | null = null;
-  private readonly iterates: number[][] = [];
+  private readonly iterates: (number | null)[][] = [];
 
   constructor(
     private readonly spec: CaseSpec,
@@ -82,7 +82,9 @@ export class RunRecorder {
   /** Keeps a copy of x_step for the trajectory fingerprint (first F steps only). */
   keepIterate(step: number, x: Float64Array): void {
     if (step >= 1 && step <= this.spec.fingerprintSteps && this.iterates.length === step - 1) {
-      this.iterates.push(Array.from(x));
+      // JSON has no spelling for NaN or ±Infinity: a coordinate that left the finite range is kept as null.
+      const copy = Array.from(x, (v): number | null => (Number.isFinite(v) ? v : null));
+      this.iterates.push(copy);
     }
   }
 
@@ -93,7 +95,13 @@ export class RunRecorder {
   }
 
   /** Final metrics of the run. `steps` and `evaluations` are what the run used. */
-  finish(args: { seed: number; runSeed: string; stop: StopReason; evaluations: number; error?: string }): RunMetrics {
+  finish(args: {
+    seed: number;
+    runSeed: string;
+    stop: StopReason;
+    evaluations: number;
+    error?: string;
+  }): RunMetrics {
     const steps = this.lastStep;
     const diverged = this.divergence !== null;
     const metrics: RunMetrics = {

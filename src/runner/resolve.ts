@@ -1,10 +1,13 @@
 /**
- * From a config's `use` string to something that can run: a reference optimizer now; the adapters
- * (in-process modules, subprocess protocol) plug in here.
+ * From a config's `use` string to something that can run in-process: a reference optimizer or a module
+ * optimizer (src/adapters/module.ts). Process optimizers run through their adapter (src/runner/batch.ts).
  */
 import { InputError, quote } from "../core/errors.js";
 import type { OptimizerFactory } from "../core/types.js";
 import { OPTIMIZERS, type ReferenceOptimizerFactory, getOptimizer } from "../optimizers/index.js";
+import { loadModuleOptimizer } from "../adapters/module.js";
+import { parseUse } from "../adapters/use.js";
+import type { AdapterContext } from "./types.js";
 
 export interface LoadedOptimizer {
   readonly factory: OptimizerFactory;
@@ -22,7 +25,9 @@ export function referenceFactory(use: string, where: string): ReferenceOptimizer
   const canonical = canonicalUse(use);
   const [kind, name] = splitUse(canonical);
   if (kind !== "reference") {
-    throw new InputError(`${where}.use ${quote(use)}: adapter "${kind}" is not available (known: reference)`);
+    throw new InputError(
+      `${where}.use ${quote(use)}: "${kind}:" is not a reference optimizer (see src/adapters/use.ts)`,
+    );
   }
   try {
     return getOptimizer(name);
@@ -33,7 +38,32 @@ export function referenceFactory(use: string, where: string): ReferenceOptimizer
   }
 }
 
-export async function loadOptimizer(use: string, where: string): Promise<LoadedOptimizer> {
+/**
+ * A factory for an in-process optimizer: a reference optimizer, or a module optimizer (`module:PATH#EXPORT`,
+ * loaded relative to `context.baseDir`, untrusted). Process optimizers do not run in-process: RunBatch
+ * hands them to their adapter's session.
+ */
+export async function loadOptimizer(
+  use: string,
+  where: string,
+  context?: AdapterContext,
+): Promise<LoadedOptimizer> {
+  const spec = parseUse(canonicalUse(use), Object.keys(context?.processes ?? {}), `${where}.use`);
+  if (spec.kind === "module") {
+    if (context === undefined) {
+      throw new InputError(
+        `${where}.use ${quote(use)}: module paths are relative to the config file's directory, which this ` +
+          `suite does not carry; prepare it with prepareSuite (src/adapters/prepare.ts)`,
+      );
+    }
+    const { factory } = await loadModuleOptimizer(spec.path, spec.exportName, context.baseDir, where);
+    return { factory, untrusted: true };
+  }
+  if (spec.kind === "process") {
+    throw new InputError(
+      `${where}.use ${quote(use)} is served by process adapter "${spec.adapter}", not in-process`,
+    );
+  }
   return { factory: referenceFactory(use, where), untrusted: false };
 }
 

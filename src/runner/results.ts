@@ -20,7 +20,12 @@ export interface ResultsDocument {
   readonly format: typeof RESULTS_FORMAT;
   readonly version: number;
   readonly tool: { readonly name: string; readonly version: string };
-  readonly suite: { readonly seed: number; readonly hash: string; readonly cases: number; readonly runs: number };
+  readonly suite: {
+    readonly seed: number;
+    readonly hash: string;
+    readonly cases: number;
+    readonly runs: number;
+  };
   readonly environment: Environment;
   /** Present when only part of the suite ran (a shard); absent for a whole suite. */
   readonly shard?: { readonly index: number; readonly count: number };

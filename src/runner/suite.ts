@@ -36,7 +36,9 @@ export function resolveSuite(config: SuiteConfig, file: string, options: Resolve
   problems.forEach((p, i) => {
     const prev = seenKeys.get(p.key);
     if (prev !== undefined) {
-      throw new InputError(`${where}: problems[${i}] repeats problems[${prev}] (${p.key}); give it different params`);
+      throw new InputError(
+        `${where}: problems[${i}] repeats problems[${prev}] (${p.key}); give it different params`,
+      );
     }
     seenKeys.set(p.key, i);
   });

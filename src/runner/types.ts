@@ -56,12 +56,45 @@ export interface CaseSpec {
   readonly seeds: number;
   /** Measure the exact objective every this many steps (stochastic problems). */
   readonly measureEvery: number;
+  /** Set on the cases a scenario adds (src/runner/scenarios.ts); absent on ordinary cases. */
+  readonly scenario?: ScenarioSpec;
+}
+
+/** What a scenario does to its runs beyond the case's hyperparameters and problem. */
+export interface ScenarioSpec {
+  /** The scenario's name in the config. */
+  readonly name: string;
+  /** Stop after step `at`, export the state, continue in a fresh instance that imports it. */
+  readonly resume?: { readonly at: number };
+  /** setLearningRate(lr) after step `at` (lr resolved from the config's lr or factor). */
+  readonly lrChange?: { readonly at: number; readonly lr: number };
+}
+
+/** A process adapter, resolved: defaults filled in, `cwd` absolute (src/adapters/session.ts). */
+export interface ProcessAdapterSpec {
+  readonly name: string;
+  readonly command: readonly string[];
+  readonly cwd: string;
+  readonly env: Readonly<Record<string, string>>;
+  readonly maxRuns: number;
+  readonly maxMessageBytes: number;
+  readonly timeouts: { readonly start: number; readonly message: number; readonly run: number };
+}
+
+/** What adapters need to reach the user's code; sent to every worker, never written into results. */
+export interface AdapterContext {
+  /** Directory of the config file: module paths are relative to it. */
+  readonly baseDir: string;
+  /** Process adapters by name. */
+  readonly processes: Readonly<Record<string, ProcessAdapterSpec>>;
 }
 
 /** A resolved suite: the cases in stable order plus what identifies the suite definition. */
 export interface SuiteSpec {
   readonly seed: number;
   readonly cases: readonly CaseSpec[];
+  /** Present when the suite uses module or process optimizers (src/adapters/prepare.ts). */
+  readonly adapters?: AdapterContext;
 }
 
 /** Metrics of one run (one case, one seed). Non-finite values are stored as null. */
@@ -86,9 +119,14 @@ export interface RunMetrics {
   /** Gap at each checkpoint; null past the end of the run. */
   readonly trace: readonly (number | null)[];
   /** First iterates x_1 … x_F (trajectory fingerprint), when the case keeps them. */
-  readonly iterates?: readonly (readonly number[])[];
+  readonly iterates?: readonly (readonly (number | null)[])[];
   /** Why the run failed, when stop = "error". */
   readonly error?: string;
+  /**
+   * Resume scenarios: whether the resumed run retraced the uninterrupted one bit for bit, else the
+   * first step whose iterate differs (null when the runs could not be compared: see `error`).
+   */
+  readonly resume?: { readonly equal: boolean; readonly firstDifference: number | null };
 }
 
 export interface CaseResult {

@@ -19,13 +19,21 @@ const batch = new RunBatch(suite);
 
 port.on("message", (msg: ChunkMessage | { type: "close" }) => {
   if (msg.type === "close") {
-    port.close();
+    // End the optimizer processes this worker started, then let the thread exit.
+    batch
+      .close()
+      .catch(() => {})
+      .finally(() => port.close());
     return;
   }
   batch
     .runItems(msg.items)
     .then((metrics) => port.postMessage({ type: "done", id: msg.id, metrics }))
     .catch((err: unknown) =>
-      port.postMessage({ type: "failed", id: msg.id, error: err instanceof Error ? err.stack ?? err.message : String(err) }),
+      port.postMessage({
+        type: "failed",
+        id: msg.id,
+        error: err instanceof Error ? (err.stack ?? err.message) : String(err),
+      }),
     );
 });

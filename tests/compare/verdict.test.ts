@@ -44,7 +44,7 @@ describe("case verdicts", () => {
     const { base, cand } = pairCase(5, (_, b) => ({
       ...b,
       finalGap: b.finalGap! * (1 + 4e-16),
-      iterates: b.iterates!.map((x) => x.map((v) => v * (1 + 2.2e-16))),
+      iterates: b.iterates!.map((x) => x.map((v) => (v === null ? v : v * (1 + 2.2e-16)))),
     }));
     const v = compareResults(results([cand]), baselines([base]));
     const c = v.cases[0];
@@ -223,7 +223,7 @@ describe("case verdicts", () => {
   it("trajectory changed, convergence equivalent: both are reported", () => {
     const { base, cand } = pairCase(30, (i, b) => ({
       ...b,
-      iterates: b.iterates!.map((x, s) => x.map((v) => (s >= 1 ? v * (1 + 1e-7) : v))),
+      iterates: b.iterates!.map((x, s) => x.map((v) => (s >= 1 && v !== null ? v * (1 + 1e-7) : v))),
       stepsTo: b.stepsTo.map((x) => (x === null ? null : x + (i % 2))),
     }));
     const v = compareResults(results([cand]), baselines([base]), { policy: ONE_LOOK });

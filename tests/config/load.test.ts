@@ -40,7 +40,10 @@ describe("parseConfig", () => {
   });
 
   it("reads JSON by extension", () => {
-    const c = parseConfig(JSON.stringify({ optimizers: [{ name: "sgd" }], problems: [{ use: "beale" }] }), "s.json");
+    const c = parseConfig(
+      JSON.stringify({ optimizers: [{ name: "sgd" }], problems: [{ use: "beale" }] }),
+      "s.json",
+    );
     expect(c.optimizers[0].name).toBe("sgd");
   });
 
@@ -48,9 +51,15 @@ describe("parseConfig", () => {
     ["seeds: ten\n", 'config gradgate.yml: seeds must be an integer, got "ten"'],
     ["seeds: 0\n", "config gradgate.yml: seeds must be ≥ 1, got 0"],
     ["budget:\n  steps: -3\n", "config gradgate.yml: budget.steps must be ≥ 1, got -3"],
-    ["budget:\n  stepz: 3\n", "config gradgate.yml: budget.stepz is not a known field (known: steps, evaluations, seconds)"],
+    [
+      "budget:\n  stepz: 3\n",
+      "config gradgate.yml: budget.stepz is not a known field (known: steps, evaluations, seconds)",
+    ],
     ["stopAt: 2\n", "config gradgate.yml: stopAt must be < 1, got 2"],
-    ["ladder: [0.1, 0.5]\n", "config gradgate.yml: ladder must be strictly decreasing, got 0.5 after 0.1 at ladder[1]"],
+    [
+      "ladder: [0.1, 0.5]\n",
+      "config gradgate.yml: ladder must be strictly decreasing, got 0.5 after 0.1 at ladder[1]",
+    ],
     ["version: 2\n", "config gradgate.yml: version must be 1, got 2"],
   ])("rejects %j with one clear message", (extra, message) => {
     expect(errorOf(minimal + extra)).toBe(message);
@@ -81,7 +90,9 @@ problems:
   });
 
   it("reports YAML syntax errors with the position", () => {
-    expect(errorOf("optimizers: [\n")).toMatch(/^config gradgate.yml: not valid YAML at line \d+, column \d+: /);
+    expect(errorOf("optimizers: [\n")).toMatch(
+      /^config gradgate.yml: not valid YAML at line \d+, column \d+: /,
+    );
   });
 
   it("reports a top level that is not a mapping", () => {

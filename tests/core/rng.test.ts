@@ -56,7 +56,9 @@ describe("Pcg32", () => {
   });
 
   it("rejects a bound outside [1, 2^32)", () => {
-    expect(() => new Pcg32(1n, 1n).nextBelow(0)).toThrow("nextBelow: bound must be an integer in [1, 2^32), got 0");
+    expect(() => new Pcg32(1n, 1n).nextBelow(0)).toThrow(
+      "nextBelow: bound must be an integer in [1, 2^32), got 0",
+    );
   });
 });
 

@@ -38,7 +38,8 @@ export function toyProblem(opts: { stochastic?: boolean; sigma?: number } = {}):
         xStar: new Float64Array(n),
         stochastic: opts.stochastic === true,
         evaluate(x, grad) {
-          for (let i = 0; i < n; i++) grad[i] = (i + 1) * x[i] + (opts.stochastic ? sigma * ctx.noise.nextNormal() : 0);
+          for (let i = 0; i < n; i++)
+            grad[i] = (i + 1) * x[i] + (opts.stochastic ? sigma * ctx.noise.nextNormal() : 0);
           return objective(x);
         },
         objective,
@@ -51,7 +52,9 @@ export function toyProblem(opts: { stochastic?: boolean; sigma?: number } = {}):
 }
 
 /** Gradient descent; `lookahead` evaluates at a separate buffer first (never at the iterate). */
-export function gdFactory(opts: { lookahead?: boolean; throwAt?: number; touchFirst?: boolean } = {}): OptimizerFactory {
+export function gdFactory(
+  opts: { lookahead?: boolean; throwAt?: number; touchFirst?: boolean } = {},
+): OptimizerFactory {
   return {
     name: "gd",
     title: "gradient descent (test)",

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { canonicalJson } from "../../src/core/json.js";
 import { executeRun } from "../../src/runner/execute.js";
 import { gdFactory, toyCase, toyProblem } from "../helpers/toy.js";
 
@@ -14,7 +15,7 @@ describe("executeRun on f = ½(x₁² + 2x₂²) with gradient descent", () => {
     expect(Math.abs(metrics.rate! - 0.81)).toBeLessThan(1e-9); // absolute
     // Closed form: x_k,i = (1 − 0.1·cᵢ)^k x_0,i, so f_k = ½·0.81^k·x₀₁² + 0.64^k·x₀₂²; x₀ is recovered
     // from the kept first iterate x₁ = (0.9 x₀₁, 0.8 x₀₂). The first k with f_k ≤ 0.1·f₀ is rung 0.
-    const [a, b] = [metrics.iterates![0][0] / 0.9, metrics.iterates![0][1] / 0.8];
+    const [a, b] = [metrics.iterates![0][0]! / 0.9, metrics.iterates![0][1]! / 0.8];
     const f = (k: number) => 0.5 * 0.81 ** k * a * a + 0.64 ** k * b * b;
     let k = 0;
     while (f(k) > 0.1 * f(0)) k++;
@@ -54,6 +55,13 @@ describe("executeRun on f = ½(x₁² + 2x₂²) with gradient descent", () => {
     expect(metrics.finalGap).toBeNull();
   });
 
+  it("keeps iterates that left the finite range as null, so the results stay valid JSON", () => {
+    const { metrics } = executeRun(toyCase({ hyper: { lr: 1e308 } }), 0, 7, gdFactory(), toyProblem());
+    expect(metrics.stop).toBe("diverged");
+    expect(metrics.iterates!.flat()).toContain(null);
+    expect(() => canonicalJson(metrics)).not.toThrow();
+  });
+
   it("records a throwing optimizer as an error run without throwing", () => {
     const { metrics } = executeRun(toyCase(), 0, 7, gdFactory({ throwAt: 5 }), toyProblem());
     expect(metrics.stop).toBe("error");
@@ -61,7 +69,13 @@ describe("executeRun on f = ½(x₁² + 2x₂²) with gradient descent", () => {
   });
 
   it("honours the evaluation budget", () => {
-    const { metrics } = executeRun(toyCase({ budget: { steps: 200, evaluations: 50, seconds: 60 } }), 0, 7, gdFactory(), toyProblem());
+    const { metrics } = executeRun(
+      toyCase({ budget: { steps: 200, evaluations: 50, seconds: 60 } }),
+      0,
+      7,
+      gdFactory(),
+      toyProblem(),
+    );
     expect(metrics.stop).toBe("evaluations");
     expect(metrics.evaluations).toBe(50);
     expect(metrics.steps).toBe(50);
