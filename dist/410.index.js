@@ -7,7 +7,7 @@ export const modules = {
 
 __webpack_require__.r(__webpack_exports__);
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(5919);
-/* harmony import */ var _batch_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(3134);
+/* harmony import */ var _batch_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(8550);
 /**
  * Worker-thread side of the pool: receives the suite once, then chunks of (case, seed) items, and
  * posts back their metrics. Optimizer faults are recorded in the runs; only harness bugs reach here.
@@ -21,13 +21,21 @@ const suite = node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.workerData.suite;
 const batch = new _batch_js__WEBPACK_IMPORTED_MODULE_1__/* .RunBatch */ .A(suite);
 port.on("message", (msg) => {
     if (msg.type === "close") {
-        port.close();
+        // End the optimizer processes this worker started, then let the thread exit.
+        batch
+            .close()
+            .catch(() => { })
+            .finally(() => port.close());
         return;
     }
     batch
         .runItems(msg.items)
         .then((metrics) => port.postMessage({ type: "done", id: msg.id, metrics }))
-        .catch((err) => port.postMessage({ type: "failed", id: msg.id, error: err instanceof Error ? err.stack ?? err.message : String(err) }));
+        .catch((err) => port.postMessage({
+        type: "failed",
+        id: msg.id,
+        error: err instanceof Error ? (err.stack ?? err.message) : String(err),
+    }));
 });
 
 

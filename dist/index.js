@@ -8279,6 +8279,1638 @@ module.exports = {
 
 /***/ }),
 
+/***/ 5742:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   X_: () => (/* binding */ ChildFault),
+/* harmony export */   rl: () => (/* binding */ ChildLink),
+/* harmony export */   tQ: () => (/* binding */ quoteLine)
+/* harmony export */ });
+/* unused harmony export QUOTE_CHARS */
+/* harmony import */ var node_child_process__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1421);
+/**
+ * One optimizer process: spawned without a shell, with the minimal environment (./env.ts), spoken to
+ * in JSON lines. Turns everything that can go wrong with a child into a `ChildFault` with a precise
+ * reason: it could not start, it exited, it stayed silent past a time-out, a line was too long, a line
+ * was not JSON. Keeps the tail of its stderr for error reports.
+ *
+ * Lines are read in order: `next` resolves with the child's next line (`exchange` = `send` + `next`).
+ * A line that arrives when no reply is awaited is kept for the next `next` (where it is judged: it is
+ * usually not the expected message).
+ *
+ * While no exchange is outstanding the child's handles are unreferenced, so an idle child never keeps
+ * the harness (or a worker thread) alive; a child whose harness goes away reads end-of-file on stdin
+ * and should exit.
+ */
+
+/** Why the link to a child failed; `reason` is a complete sentence for the run's `error`. */
+class ChildFault extends Error {
+    reason;
+    name = "ChildFault";
+    constructor(reason) {
+        super(reason);
+        this.reason = reason;
+    }
+}
+/** At most this many characters of an offending line are quoted in a reason. */
+const QUOTE_CHARS = 120;
+/** Quotes a line from a child for an error message: JSON string syntax, truncated. */
+function quoteLine(line) {
+    const cut = line.length > QUOTE_CHARS ? line.slice(0, QUOTE_CHARS) : line;
+    return JSON.stringify(cut) + (line.length > QUOTE_CHARS ? ` (${line.length} characters, truncated)` : "");
+}
+class ChildLink {
+    options;
+    child;
+    chunks = [];
+    pendingBytes = 0;
+    lines = [];
+    waiter = null;
+    fault = null;
+    stderrText = "";
+    exited = false;
+    /** After an over-long line nothing more from this child is read. */
+    discarding = false;
+    /** Set by kill(): the child is being stopped and must not be used again. */
+    killed = false;
+    exitPromise;
+    /** Lines received so far (for messages). */
+    lineCount = 0;
+    constructor(options) {
+        this.options = options;
+        const [program, ...args] = options.command;
+        this.child = (0,node_child_process__WEBPACK_IMPORTED_MODULE_0__.spawn)(program, args, {
+            cwd: options.cwd,
+            env: options.env,
+            stdio: ["pipe", "pipe", "pipe"],
+            shell: false,
+            windowsHide: true,
+            // Own process group, so a time-out can kill the child's own children too.
+            detached: process.platform !== "win32",
+        });
+        let markExited = () => { };
+        this.exitPromise = new Promise((resolve) => (markExited = resolve));
+        this.child.on("error", (err) => {
+            const what = err.code === "ENOENT"
+                ? `could not start ${quoteLine(program)}: not found (a bare name is looked up on PATH, a relative path ` +
+                    `from the working directory ${quoteLine(options.cwd)})`
+                : `could not start ${quoteLine(program)}: ${err.message}`;
+            this.setFault(new ChildFault(`${options.label}: ${what}`));
+            this.exited = true;
+            markExited();
+        });
+        // "close" comes once the output is drained too, so a last line written before exiting is still
+        // read; a grandchild holding the pipes open must not delay the fault for long, hence the timer.
+        const exitFault = (code, signal) => {
+            const how = signal !== null ? `was killed by ${signal}` : `exited with status ${code}`;
+            this.setFault(new ChildFault(`${options.label}: the process ${how}`));
+        };
+        this.child.on("exit", (code, signal) => {
+            this.exited = true;
+            markExited();
+            setTimeout(() => exitFault(code, signal), 500).unref();
+        });
+        this.child.on("close", (code, signal) => exitFault(code, signal));
+        this.child.stdout.on("data", (chunk) => this.onData(chunk));
+        this.child.stderr.setEncoding("utf8");
+        this.child.stderr.on("data", (text) => {
+            const keep = options.stderrKeep ?? 4000;
+            this.stderrText = (this.stderrText + text).slice(-keep);
+        });
+        // A child that exits early makes writes fail with EPIPE; the exit handler reports it.
+        this.child.stdin.on("error", () => { });
+        this.idle();
+    }
+    get pid() {
+        return this.child.pid;
+    }
+    get alive() {
+        return !this.exited && !this.killed && this.fault === null;
+    }
+    /** The last `lines` lines of stderr (at most `chars` characters), or "" if it wrote none. */
+    stderrTail(lines = 10, chars = 1000) {
+        const all = this.stderrText.replace(/\s+$/, "").split("\n");
+        return all.slice(-lines).join("\n").slice(-chars);
+    }
+    /**
+     * Writes `line` (a newline is added) and resolves with the child's next line. Rejects with a
+     * `ChildFault` when the child exits, writes a line that is too long, or stays silent `seconds`.
+     */
+    exchange(line, seconds, waitingFor) {
+        if (this.fault !== null)
+            return Promise.reject(this.fault);
+        this.send(line);
+        return this.next(seconds, waitingFor);
+    }
+    /** Writes `line` (a newline is added); a failed write shows up as the child's exit. */
+    send(line) {
+        if (this.fault !== null || this.killed)
+            return;
+        this.child.stdin.write(line + "\n");
+    }
+    /** Resolves with the next line (no write), with the same faults as `exchange`. */
+    next(seconds, waitingFor) {
+        if (this.lines.length > 0)
+            return Promise.resolve(this.lines.shift());
+        if (this.fault !== null)
+            return Promise.reject(this.fault);
+        this.busy();
+        return new Promise((resolve, reject) => {
+            const timer = setTimeout(() => {
+                this.waiter = null;
+                this.setFault(new ChildFault(`${this.options.label}: no ${waitingFor} within ${seconds} s (time-out); the process was stopped`));
+                this.kill();
+                reject(this.fault);
+            }, seconds * 1000);
+            this.waiter = {
+                resolve: (l) => {
+                    clearTimeout(timer);
+                    this.idle();
+                    resolve(l);
+                },
+                reject: (f) => {
+                    clearTimeout(timer);
+                    this.idle();
+                    reject(f);
+                },
+            };
+        });
+    }
+    /** Ends the session politely: writes `line`, closes stdin, kills after `graceSeconds`. */
+    async close(line, graceSeconds = 2) {
+        if (!this.exited) {
+            if (line !== null && this.fault === null)
+                this.child.stdin.write(line + "\n");
+            this.child.stdin.end();
+            const timer = setTimeout(() => this.kill(), graceSeconds * 1000);
+            this.busy();
+            await this.exitPromise;
+            clearTimeout(timer);
+        }
+        this.setFault(new ChildFault(`${this.options.label}: the process was closed`));
+    }
+    /** Kills the child (and its process group) at once. */
+    kill() {
+        this.killed = true;
+        this.discarding = true;
+        if (this.exited)
+            return;
+        const pid = this.child.pid;
+        try {
+            if (pid !== undefined && process.platform !== "win32")
+                process.kill(-pid, "SIGKILL");
+            else
+                this.child.kill("SIGKILL");
+        }
+        catch {
+            this.child.kill("SIGKILL");
+        }
+    }
+    /** Records a fault (the first one wins) and fails a waiting exchange. */
+    setFault(fault) {
+        if (this.fault === null)
+            this.fault = fault;
+        const w = this.waiter;
+        if (w !== null) {
+            this.waiter = null;
+            w.reject(this.fault);
+        }
+    }
+    onData(chunk) {
+        if (this.discarding)
+            return;
+        let start = 0;
+        for (;;) {
+            const nl = chunk.indexOf(10, start);
+            if (nl < 0)
+                break;
+            const piece = chunk.subarray(start, nl);
+            if (this.pendingBytes + piece.length > this.options.maxLineBytes)
+                return this.tooLong(piece);
+            let text;
+            if (this.chunks.length === 0)
+                text = piece.toString("utf8");
+            else {
+                this.chunks.push(piece);
+                text = Buffer.concat(this.chunks).toString("utf8");
+                this.chunks = [];
+            }
+            this.pendingBytes = 0;
+            start = nl + 1;
+            this.lineCount++;
+            this.deliver(text.endsWith("\r") ? text.slice(0, -1) : text);
+        }
+        if (start < chunk.length) {
+            const rest = chunk.subarray(start);
+            if (this.pendingBytes + rest.length > this.options.maxLineBytes)
+                return this.tooLong(rest);
+            // Copy: the stream may reuse its buffer.
+            this.chunks.push(Buffer.from(rest));
+            this.pendingBytes += rest.length;
+        }
+    }
+    tooLong(piece) {
+        const head = Buffer.concat([...this.chunks, piece.subarray(0, QUOTE_CHARS)])
+            .subarray(0, QUOTE_CHARS)
+            .toString("utf8");
+        this.chunks = [];
+        this.discarding = true;
+        this.setFault(new ChildFault(`${this.options.label}: line ${this.lineCount + 1} of its output is longer than maxMessageBytes ` +
+            `(${this.options.maxLineBytes} bytes), starting ${quoteLine(head)}; the process was stopped`));
+        this.kill();
+    }
+    deliver(line) {
+        const w = this.waiter;
+        if (w !== null) {
+            this.waiter = null;
+            w.resolve(line);
+        }
+        else {
+            this.lines.push(line);
+        }
+    }
+    busy() {
+        this.child.ref();
+        for (const s of [this.child.stdin, this.child.stdout, this.child.stderr])
+            s.ref?.();
+    }
+    idle() {
+        this.child.unref();
+        for (const s of [this.child.stdin, this.child.stdout, this.child.stderr])
+            s.unref?.();
+    }
+}
+
+
+/***/ }),
+
+/***/ 6902:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   QN: () => (/* binding */ instanceCapabilities),
+/* harmony export */   kD: () => (/* binding */ loadModuleOptimizer)
+/* harmony export */ });
+/* unused harmony exports checkFactory, mergeModuleHyper */
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3024);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6760);
+/* harmony import */ var node_url__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(3136);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4552);
+/**
+ * The in-process adapter: an optimizer from an ES module of the user's repository, implementing the
+ * same `OptimizerFactory` contract as the reference optimizers (src/core/types.ts):
+ *
+ *   export const myAdam = {
+ *     name: "my-adam", title: "...", defaults: { lr: 0.001 },      // name, title, defaults optional
+ *     create(hyper, dim) { return { step(x, oracle) { ... }, exportState() {...}, ... }; },
+ *   };
+ *
+ * JavaScript only (ESM; CommonJS through Node's interop). TypeScript sources need a build step first:
+ * Node 20 cannot strip types (`use.ts` rejects .ts paths with that advice).
+ *
+ * Hyperparameters: the factory's `defaults` (if any) are merged under the config's values and the
+ * result is passed through unchecked — the module validates its own. The code is untrusted: the run
+ * loop double-checks the iterate before reusing a loss (LoadedOptimizer.untrusted → verifyIterate),
+ * and `create` is wrapped so that a wrong shape becomes a clear error in the run, never a crash.
+ */
+
+
+
+
+const cache = new Map();
+/**
+ * Imports `path#exportName` relative to `baseDir` and checks its shape. Throws an `InputError` whose
+ * message starts with `where` when the file is missing, cannot be imported, lacks the export, or the
+ * export is not factory-shaped. Cached per file and export (per thread).
+ */
+function loadModuleOptimizer(path, exportName, baseDir, where) {
+    const file = (0,node_path__WEBPACK_IMPORTED_MODULE_1__.resolve)(baseDir, path);
+    const key = `${file}#${exportName}`;
+    let loaded = cache.get(key);
+    if (loaded === undefined) {
+        loaded = load(file, path, exportName, where);
+        cache.set(key, loaded);
+        loaded.catch(() => cache.delete(key));
+    }
+    return loaded;
+}
+async function load(file, path, exportName, where) {
+    const label = `module ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(`${path}#${exportName}`)}`;
+    if (!(0,node_fs__WEBPACK_IMPORTED_MODULE_0__.existsSync)(file))
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where}: ${label}: no such file ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(file)}`);
+    let namespace;
+    try {
+        namespace = (await import(/* webpackIgnore: true */ /* @vite-ignore */ (0,node_url__WEBPACK_IMPORTED_MODULE_2__.pathToFileURL)(file).href));
+    }
+    catch (err) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where}: ${label} could not be imported: ${firstLine(err)}`);
+    }
+    if (!(exportName in namespace)) {
+        const names = Object.keys(namespace).sort();
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where}: ${label} has no export ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(exportName)} (exports: ${names.length > 0 ? names.join(", ") : "none"})`);
+    }
+    const value = namespace[exportName];
+    return { factory: checkFactory(value, `${where}: ${label}`, exportName), file };
+}
+/**
+ * Checks that `value` is factory-shaped and returns a wrapper: `defaults` validated once, `create`
+ * given a frozen copy of the hyperparameters and its result checked for a `step` method.
+ */
+function checkFactory(value, where, fallbackName) {
+    if (value === null ||
+        typeof value !== "object" ||
+        typeof value.create !== "function") {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where} must be an object with a create(hyper, dim) method (an OptimizerFactory), got ${describe(value)}`);
+    }
+    const source = value;
+    const defaults = source.defaults ?? {};
+    if (defaults === null || typeof defaults !== "object" || Array.isArray(defaults)) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where}: defaults must be a mapping of hyperparameter names to values, got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(defaults)}`);
+    }
+    for (const [name, v] of Object.entries(defaults)) {
+        if (!isHyperValue(v)) {
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where}: defaults.${name} must be a finite number, a boolean or a string, got ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(v)}`);
+        }
+    }
+    const name = typeof source.name === "string" && source.name !== "" ? source.name : fallbackName;
+    const title = typeof source.title === "string" ? source.title : name;
+    const frozenDefaults = Object.freeze({ ...defaults });
+    return Object.freeze({
+        name,
+        title,
+        defaults: frozenDefaults,
+        create(hyper, dim) {
+            const instance = source.create.call(source, Object.freeze({ ...hyper }), dim);
+            if (instance === null ||
+                typeof instance !== "object" ||
+                typeof instance.step !== "function") {
+                throw new Error(`create(hyper, dim) must return an object with a step(x, oracle) method, got ${describe(instance)}`);
+            }
+            return instance;
+        },
+    });
+}
+/** The factory's defaults under the config's values (the config wins); nothing is checked. */
+function mergeModuleHyper(factory, given) {
+    return { ...factory.defaults, ...given };
+}
+/** Which optional capabilities an instance has (probed on an instance made for the purpose). */
+function instanceCapabilities(instance) {
+    return {
+        state: typeof instance.exportState === "function" && typeof instance.importState === "function",
+        lr: typeof instance.setLearningRate === "function",
+    };
+}
+function isHyperValue(v) {
+    return typeof v === "boolean" || typeof v === "string" || (typeof v === "number" && Number.isFinite(v));
+}
+function describe(value) {
+    if (typeof value === "function")
+        return "a function (export the factory object, not a class or function)";
+    if (value === null || typeof value !== "object")
+        return (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(value);
+    const keys = Object.keys(value);
+    return keys.length === 0 ? "an object without methods" : `an object with ${keys.slice(0, 8).join(", ")}`;
+}
+function firstLine(err) {
+    const text = err instanceof Error ? err.message : String(err);
+    return text.split("\n")[0];
+}
+
+
+/***/ }),
+
+/***/ 9745:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  M: () => (/* binding */ ProcessSession)
+});
+
+// UNUSED EXPORTS: parseWithNonFinite
+
+// EXTERNAL MODULE: external "node:fs"
+var external_node_fs_ = __nccwpck_require__(3024);
+// EXTERNAL MODULE: ./node_modules/ajv/dist/2020.js
+var _2020 = __nccwpck_require__(2210);
+// EXTERNAL MODULE: ./build/package/core/version.js
+var version = __nccwpck_require__(6063);
+// EXTERNAL MODULE: ./build/package/adapters/child.js
+var child = __nccwpck_require__(5742);
+;// CONCATENATED MODULE: ./build/package/adapters/env.js
+/**
+ * The environment an optimizer process gets: an allow-list, never the harness's own environment.
+ *
+ * The optimizer under test is untrusted code (a pull request can change it), while the harness may run
+ * with a GitHub token and other secrets in its environment (GITHUB_TOKEN, INPUT_*, ACTIONS_*). So the
+ * child receives only the variables named here, copied from the harness when set, plus the literal
+ * values the config gives under `adapters.NAME.env`. A deny-list would leak every secret nobody
+ * thought of; an allow-list leaks none by construction.
+ */
+/**
+ * Variables copied from the harness's environment when set: what programs need to find executables,
+ * a home directory, the locale, the time zone and a temporary directory (and their Windows spellings).
+ */
+const PASSED_VARIABLES = Object.freeze([
+    "PATH",
+    "HOME",
+    "LANG",
+    "LANGUAGE",
+    "LC_ALL",
+    "LC_CTYPE",
+    "LC_NUMERIC",
+    "TZ",
+    "TMPDIR",
+    "TEMP",
+    "TMP",
+    "SYSTEMROOT",
+    "WINDIR",
+    "PATHEXT",
+    "COMSPEC",
+    "USERPROFILE",
+]);
+/**
+ * The child's environment: the allow-listed variables from `parent` (when set), then `extra` (literal
+ * values from the config) on top. Nothing else.
+ */
+function minimalEnvironment(parent, extra = {}) {
+    const env = {};
+    for (const name of PASSED_VARIABLES) {
+        const value = parent[name];
+        if (value !== undefined)
+            env[name] = value;
+    }
+    for (const [name, value] of Object.entries(extra))
+        env[name] = value;
+    return env;
+}
+
+// EXTERNAL MODULE: ./build/package/core/rng.js
+var rng = __nccwpck_require__(2906);
+// EXTERNAL MODULE: ./build/package/runner/recorder.js
+var recorder = __nccwpck_require__(8022);
+;// CONCATENATED MODULE: ./build/package/adapters/process-run.js
+
+
+class ProtocolRun {
+    request;
+    now;
+    problem;
+    dim;
+    /** The last reported iterate x_k. */
+    x;
+    grad;
+    /** Scratch for a requested evaluation point. */
+    point;
+    recorder;
+    status = "running";
+    /** Id of the client-side instance (changes when a resume scenario restarts the run). */
+    clientId = -1;
+    /** Global step at which the current client instance started (its step 1 is step base + 1). */
+    instanceBase = 0;
+    /** Completed steps. */
+    k = 0;
+    evaluations = 0;
+    /** True while x_k is not yet measured (waiting for the next evaluation or the end of the run). */
+    pending = false;
+    /** Evaluations used by the end of step k. */
+    evalsAtK = 0;
+    /** Set when the run waits for its exported state (resume scenario). */
+    awaitingState = false;
+    metrics = null;
+    startedAt;
+    seedHex;
+    every;
+    constructor(request, now) {
+        this.request = request;
+        this.now = now;
+        const { spec, seedIndex, suiteSeed, definition } = request;
+        const runSeed = (0,rng/* deriveRunSeed */.EK)(suiteSeed, spec.problemKey, seedIndex);
+        this.seedHex = (0,rng/* seedToHex */.K$)(runSeed);
+        this.problem = definition.create(spec.params, { noise: (0,rng/* runStream */.G5)(runSeed, rng/* STREAM */.dY.noise) });
+        this.dim = this.problem.dim;
+        this.x = new Float64Array(this.dim);
+        this.grad = new Float64Array(this.dim);
+        this.point = new Float64Array(this.dim);
+        this.problem.start(this.x, (0,rng/* runStream */.G5)(runSeed, rng/* STREAM */.dY.start));
+        this.recorder = new recorder/* RunRecorder */.K(spec, this.problem.fStar);
+        this.every = this.problem.stochastic ? Math.max(1, spec.measureEvery) : 1;
+        this.startedAt = now();
+    }
+    get spec() {
+        return this.request.spec;
+    }
+    /** Measures f(x₀). Returns the metrics if the run must not start (non-finite f₀), else null. */
+    begin() {
+        const first = this.recorder.begin(this.problem.objective(this.x));
+        return first === null ? null : this.end(first, 0);
+    }
+    /** The `start` entry for a client instance with id `clientId` (from x_k, with `state` for a restart). */
+    startEntry(clientId, state) {
+        this.clientId = clientId;
+        this.instanceBase = this.k;
+        const pauseAt = this.request.control?.pauseAt;
+        const pause = pauseAt !== undefined && pauseAt > this.k ? pauseAt - this.k : undefined;
+        return {
+            run: clientId,
+            optimizer: this.request.optimizer,
+            hyper: this.spec.hyper,
+            dim: this.dim,
+            x: Array.from(this.x),
+            ...(state !== undefined ? { state } : {}),
+            ...(pause !== undefined ? { pause } : {}),
+        };
+    }
+    /**
+     * The client completed step k+1 with iterate `x` (already checked for length; null = not finite).
+     * Records it, applies the budgets, and says whether the run goes on.
+     */
+    onStep(x) {
+        if (this.pending && this.measure(this.problem.objective(this.x), this.evalsAtK))
+            return this.status;
+        const k = ++this.k;
+        if (x === null) {
+            this.x.fill(NaN);
+            this.recorder.keepIterate(k, this.x);
+            this.request.control?.afterStep?.(k, this.x);
+            const verdict = this.recorder.record(k, NaN, this.evaluations);
+            return this.stop(verdict ?? "diverged", this.evaluations);
+        }
+        const xs = this.x;
+        for (let i = 0; i < xs.length; i++)
+            xs[i] = x[i];
+        this.recorder.keepIterate(k, xs);
+        this.request.control?.afterStep?.(k, xs);
+        this.evalsAtK = this.evaluations;
+        const { steps: maxSteps, evaluations: maxEvals, seconds } = this.spec.budget;
+        const stochastic = this.problem.stochastic;
+        if (stochastic) {
+            if (k % this.every === 0 || k === maxSteps) {
+                const verdict = this.recorder.record(k, this.problem.objective(xs), this.evaluations);
+                if (verdict !== null)
+                    return this.stop(verdict, this.evaluations);
+            }
+        }
+        else {
+            this.pending = true;
+        }
+        let budget = null;
+        if (maxEvals > 0 && this.evaluations >= maxEvals)
+            budget = "evaluations";
+        else if ((k & 63) === 0 && this.now() - this.startedAt > seconds * 1000)
+            budget = "time";
+        else if (k >= maxSteps)
+            budget = "steps";
+        if (budget !== null) {
+            let verdict = null;
+            if (this.pending) {
+                this.pending = false;
+                verdict = this.recorder.record(k, this.problem.objective(xs), this.evaluations);
+            }
+            else if (stochastic && k % this.every !== 0 && k !== maxSteps) {
+                verdict = this.recorder.record(k, this.problem.objective(xs), this.evaluations);
+            }
+            return this.stop(verdict ?? budget, this.evaluations);
+        }
+        if (this.request.control?.pauseAt === k)
+            this.status = "paused";
+        return this.status;
+    }
+    /**
+     * The client asks for the loss and gradient at `x` (length already checked; null = not finite;
+     * "iterate" = at x_k, from a step entry's `eval: true`). Returns the answer (a values entry as JSON
+     * text), or null when the run
+     * ended instead (target reached or divergence found while measuring x_k).
+     */
+    onEval(x) {
+        let atIterate = x === "iterate";
+        if (x !== "iterate" && x !== null && this.pending)
+            atIterate = sameBits(x, this.x);
+        if (this.pending) {
+            this.pending = false;
+            if (atIterate) {
+                const f = this.problem.evaluate(this.x, this.grad);
+                this.evaluations++;
+                const verdict = this.recorder.record(this.k, f, this.evalsAtK);
+                if (verdict !== null) {
+                    this.stop(verdict, this.evalsAtK);
+                    return null;
+                }
+                return this.values(f);
+            }
+            const verdict = this.recorder.record(this.k, this.problem.objective(this.x), this.evalsAtK);
+            if (verdict !== null) {
+                this.stop(verdict, this.evalsAtK);
+                return null;
+            }
+        }
+        if (x === null) {
+            // A point that is no longer finite: the run has diverged during step k+1.
+            this.evaluations++;
+            const verdict = this.recorder.record(this.k + 1, NaN, this.evaluations);
+            this.stop(verdict ?? "diverged", this.evaluations);
+            return null;
+        }
+        let f;
+        if (atIterate) {
+            f = this.problem.evaluate(this.x, this.grad);
+        }
+        else {
+            const p = this.point;
+            const xs = x;
+            for (let i = 0; i < p.length; i++)
+                p[i] = xs[i];
+            f = this.problem.evaluate(p, this.grad);
+        }
+        this.evaluations++;
+        return this.values(f);
+    }
+    /** The client's optimizer code failed: the run ends with an error naming the phase and the step. */
+    onFailed(phase, message) {
+        const next = this.k + 1;
+        const text = phase === "create"
+            ? `creating the optimizer failed: ${message}`
+            : phase === "step"
+                ? `step ${next} threw: ${message}`
+                : phase === "exportState"
+                    ? `exportState after step ${this.k} failed: ${message}`
+                    : `${phase} before step ${next} failed: ${message}`;
+        this.fail(text);
+    }
+    /** Ends the run with stop "error" and `reason` (no further measurement). */
+    fail(reason) {
+        return this.end("error", this.evaluations, reason);
+    }
+    /** The values entry as JSON text (non-finite numbers as null), built directly: the hot path. */
+    values(f) {
+        const g = this.grad;
+        let text = `{"run":${this.clientId},"f":${jsonNumber(f)},"g":[`;
+        for (let i = 0; i < g.length; i++)
+            text += i === 0 ? jsonNumber(g[i]) : `,${jsonNumber(g[i])}`;
+        return text + "]}";
+    }
+    /** Records f(x_k) for a pending measurement; true if the run ended. */
+    measure(f, evaluations) {
+        this.pending = false;
+        const verdict = this.recorder.record(this.k, f, evaluations);
+        if (verdict === null)
+            return false;
+        this.stop(verdict, evaluations);
+        return true;
+    }
+    stop(reason, evaluations) {
+        this.end(reason, evaluations);
+        return this.status;
+    }
+    end(stop, evaluations, error) {
+        if (this.metrics === null) {
+            this.metrics = this.recorder.finish({
+                seed: this.request.seedIndex,
+                runSeed: this.seedHex,
+                stop,
+                evaluations,
+                error,
+            });
+        }
+        this.status = "ended";
+        return this.metrics;
+    }
+}
+/** A number as JSON writes it (the same digits as JSON.stringify), null for NaN and ±Infinity. */
+function jsonNumber(x) {
+    return Number.isFinite(x) ? String(x) : "null";
+}
+/** Bitwise equality of a requested point and the iterate (so -0 ≠ 0 and NaN never matches). */
+function sameBits(a, b) {
+    for (let i = 0; i < b.length; i++)
+        if (!Object.is(a[i], b[i]))
+            return false;
+    return true;
+}
+
+;// CONCATENATED MODULE: ./build/package/adapters/protocol.js
+/**
+ * The subprocess protocol, version 1: the messages the harness and an optimizer process exchange as
+ * JSON lines over the process's stdin (harness → client) and stdout (client → harness). The JSON
+ * Schemas of these messages are in ./protocol-schema.ts and ship as files in schema/protocol/; the
+ * design is recorded in docs/adapters.md ("The subprocess protocol").
+ *
+ * Shape of a session:
+ *   harness: hello            client: ready      (version and the optimizers it serves, with capabilities)
+ *   harness: orders           client: report     (repeated; exactly one report answers each orders)
+ *   harness: bye              client exits
+ *
+ * One `orders` message carries work for many runs at once (start, evaluation values, resume, state
+ * export, end); its `report` answers for exactly those runs (step boundaries with iterates, evaluation
+ * requests, exported states, failures) and no others. A run the orders do not name waits. The client
+ * answers orders one by one, in the order received; the harness may send a second orders (for other
+ * runs) before the first report arrives, so both sides compute at the same time. The harness owns the
+ * problems: the client never sees a problem, only points it asked about and the loss and gradient there.
+ *
+ * A run's life in the client: `start` → evaluation requests and step reports, each step ending with
+ * the new iterate; after a step reported without an evaluation request for the next step (a step that
+ * needed none, or the pause point) the run waits until an orders `resume`s it.
+ *
+ * Numbers: every number is a JSON number. JSON has no NaN or Infinity, so non-finite values are
+ * spelled `null` where the protocol allows it: a non-finite loss or gradient entry the harness
+ * computed, or a client iterate or evaluation point that is no longer finite (the run has diverged).
+ * A bare NaN or Infinity token is not JSON and is a protocol fault.
+ */
+/** The protocol versions this harness speaks, newest last. */
+const PROTOCOL_VERSIONS = [1];
+/** Optional optimizer capabilities a client declares in its handshake. */
+const CAPABILITIES = ["state", "lr"];
+/** Where in a run a client-side failure happened. */
+const FAILURE_PHASES = ["create", "step", "exportState", "importState", "setLearningRate"];
+
+;// CONCATENATED MODULE: ./build/package/adapters/protocol-schema.js
+/**
+ * JSON Schemas (draft 2020-12) of every message of the subprocess protocol, version 1 (see
+ * ./protocol.ts for the meaning of each field). The harness validates what a client sends against
+ * `readySchema` and `reportSchema` with ajv; client authors validate what they receive against the
+ * harness messages. scripts/write-schemas.ts writes these objects to schema/protocol/ and
+ * tests/adapters/protocol-schema.test.ts fails when a shipped file differs from the object here.
+ *
+ * What a schema cannot say is checked by the harness in code: vector lengths (the run's dimension),
+ * run ids that exist, and the order of a run's entries.
+ */
+
+const BASE = "https://gradgate.dev/schema/protocol/v1";
+const DRAFT = "https://json-schema.org/draft/2020-12/schema";
+const runId = { type: "integer", minimum: 0, maximum: 9007199254740991, description: "Run id." };
+const runIds = { type: "array", items: runId };
+const count = { type: "integer", minimum: 1, maximum: 9007199254740991 };
+const finiteVector = { type: "array", items: { type: "number" } };
+const vectorOrNull = {
+    type: ["array", "null"],
+    items: { type: "number" },
+    description: "A point; null when it is not finite (NaN or ±Infinity cannot be written in JSON).",
+};
+const hyperValues = {
+    type: "object",
+    additionalProperties: { type: ["number", "boolean", "string"] },
+};
+const state = {
+    type: "object",
+    description: "An optimizer's exported state: named numbers and arrays of numbers.",
+    additionalProperties: {
+        anyOf: [{ type: "number" }, { type: "array", items: { type: "number" } }],
+    },
+};
+const helloSchema = {
+    $schema: DRAFT,
+    $id: `${BASE}/hello.schema.json`,
+    title: "gradgate protocol: hello (harness → client, first message)",
+    type: "object",
+    additionalProperties: false,
+    required: ["type", "protocols", "harness"],
+    properties: {
+        type: { const: "hello" },
+        protocols: {
+            type: "array",
+            minItems: 1,
+            items: { type: "integer", minimum: 1 },
+            description: "Protocol versions the harness speaks; the client answers with one of them.",
+        },
+        harness: { type: "string", description: "Name and version of the harness (informative)." },
+    },
+};
+const readySchema = {
+    $schema: DRAFT,
+    $id: `${BASE}/ready.schema.json`,
+    title: "gradgate protocol: ready (client → harness, answer to hello)",
+    type: "object",
+    additionalProperties: false,
+    required: ["type", "protocol", "optimizers"],
+    properties: {
+        type: { const: "ready" },
+        protocol: { type: "integer", minimum: 1, description: "The version chosen from hello.protocols." },
+        client: { type: "string", maxLength: 200, description: "Name and version of the client (informative)." },
+        optimizers: {
+            type: "array",
+            minItems: 1,
+            description: "The optimizers this process serves.",
+            items: {
+                type: "object",
+                additionalProperties: false,
+                required: ["name", "capabilities"],
+                properties: {
+                    name: { type: "string", pattern: "^[A-Za-z0-9][A-Za-z0-9_.-]*$", maxLength: 100 },
+                    title: { type: "string", maxLength: 300 },
+                    defaults: {
+                        ...hyperValues,
+                        description: "Default hyperparameters; the config's values override them.",
+                    },
+                    capabilities: {
+                        type: "array",
+                        uniqueItems: true,
+                        items: { type: "string", enum: [...CAPABILITIES] },
+                        description: '"state": exportState/importState (resume); "lr": setLearningRate between steps.',
+                    },
+                },
+            },
+        },
+    },
+};
+const ordersSchema = {
+    $schema: DRAFT,
+    $id: `${BASE}/orders.schema.json`,
+    title: "gradgate protocol: orders (harness → client; answered by exactly one report, in order)",
+    type: "object",
+    additionalProperties: false,
+    required: ["type"],
+    properties: {
+        type: { const: "orders" },
+        start: {
+            type: "array",
+            description: "New runs: create an instance, then begin stepping from x.",
+            items: {
+                type: "object",
+                additionalProperties: false,
+                required: ["run", "optimizer", "hyper", "dim", "x"],
+                properties: {
+                    run: runId,
+                    optimizer: { type: "string" },
+                    hyper: { ...hyperValues, description: "Hyperparameters with the optimizer's defaults merged in." },
+                    dim: count,
+                    x: { ...finiteVector, description: "Start point, length dim." },
+                    state: { ...state, description: "Import this state before the first step." },
+                    pause: {
+                        ...count,
+                        description: "After completing this step (counted from 1 for this instance), wait for resume.",
+                    },
+                },
+            },
+        },
+        values: {
+            type: "array",
+            description: "Loss and gradient at the point each run asked about; null = not finite.",
+            items: {
+                type: "object",
+                additionalProperties: false,
+                required: ["run", "f", "g"],
+                properties: {
+                    run: runId,
+                    f: { type: ["number", "null"] },
+                    g: { type: "array", items: { type: ["number", "null"] } },
+                },
+            },
+        },
+        resume: {
+            type: "array",
+            description: "Waiting runs to continue: at their pause point, or after a step reported without an evaluation request.",
+            items: {
+                type: "object",
+                additionalProperties: false,
+                required: ["run"],
+                properties: {
+                    run: runId,
+                    lr: {
+                        type: "number",
+                        exclusiveMinimum: 0,
+                        description: "Call setLearningRate(lr) before the next step.",
+                    },
+                    pause: {
+                        ...count,
+                        description: "New pause point: after this step (counted from 1 for this instance).",
+                    },
+                },
+            },
+        },
+        exportState: { ...runIds, description: "Paused runs whose state the report must carry in states." },
+        end: { ...runIds, description: "Runs that are over: forget them." },
+    },
+};
+const byeSchema = {
+    $schema: DRAFT,
+    $id: `${BASE}/bye.schema.json`,
+    title: "gradgate protocol: bye (harness → client, last message; the client exits with status 0)",
+    type: "object",
+    additionalProperties: false,
+    required: ["type"],
+    properties: { type: { const: "bye" } },
+};
+const reportSchema = {
+    $schema: DRAFT,
+    $id: `${BASE}/report.schema.json`,
+    title: "gradgate protocol: report (client → harness; answers one orders, for exactly the runs it names)",
+    type: "object",
+    additionalProperties: false,
+    required: ["type"],
+    properties: {
+        type: { const: "report" },
+        steps: {
+            type: "array",
+            description: "Completed steps (at most one per run per report, before that run's evaluation request).",
+            items: {
+                type: "object",
+                additionalProperties: false,
+                required: ["run", "x"],
+                properties: {
+                    run: runId,
+                    x: { ...vectorOrNull, description: "The new iterate, length dim; null when it is not finite." },
+                    eval: {
+                        type: "boolean",
+                        description: "true: the next step's first evaluation is at this iterate.",
+                    },
+                },
+            },
+        },
+        evals: {
+            type: "array",
+            description: "Evaluation requests (at most one outstanding per run).",
+            items: {
+                type: "object",
+                additionalProperties: false,
+                required: ["run", "x"],
+                properties: { run: runId, x: vectorOrNull },
+            },
+        },
+        states: {
+            type: "array",
+            description: "States asked for by orders.exportState.",
+            items: {
+                type: "object",
+                additionalProperties: false,
+                required: ["run", "state"],
+                properties: { run: runId, state },
+            },
+        },
+        failed: {
+            type: "array",
+            description: 'Runs whose optimizer code raised an error; each ends with stop "error".',
+            items: {
+                type: "object",
+                additionalProperties: false,
+                required: ["run", "phase", "message"],
+                properties: {
+                    run: runId,
+                    phase: { type: "string", enum: [...FAILURE_PHASES] },
+                    message: { type: "string" },
+                },
+            },
+        },
+    },
+};
+/** Every protocol schema with the file it ships as (paths relative to the repository root). */
+const PROTOCOL_SCHEMAS = [
+    { file: "schema/protocol/hello.schema.json", schema: helloSchema },
+    { file: "schema/protocol/ready.schema.json", schema: readySchema },
+    { file: "schema/protocol/orders.schema.json", schema: ordersSchema },
+    { file: "schema/protocol/report.schema.json", schema: reportSchema },
+    { file: "schema/protocol/bye.schema.json", schema: byeSchema },
+];
+
+;// CONCATENATED MODULE: ./build/package/adapters/session.js
+/**
+ * A process adapter session: one optimizer process (restarted when it dies) serving many runs at once.
+ *
+ * Each turn the harness sends one `orders` message — new runs to start, the loss and gradient for every
+ * evaluation asked for in the last report, paused runs to resume, states to export, runs that are over
+ * — and reads one `report` with the next evaluation requests and step boundaries of all its runs. Up to
+ * `maxRuns` runs are in flight; a finished run's slot goes to the next queued run in the next turn, so
+ * the traffic (and everything else) depends only on the requests, never on timing.
+ *
+ * Containment. Faults of one run end that run only, with a reason naming the report, the field, the
+ * run and the bad value: a vector of the wrong length, NaN or Infinity in a point, a failure raised by
+ * the optimizer code, an entry out of order. Faults of the process end every run in flight, with the
+ * reason and the tail of the process's stderr: a crash, no report within the message time-out, a line
+ * that is not JSON (anything a program prints to stdout by mistake), a message that is not a protocol
+ * report, a line over `maxMessageBytes`. The process is then stopped and a fresh one serves the runs
+ * still queued. Nothing a client does makes `run` throw. A run still going after the run time-out
+ * ends with an error at the next report.
+ */
+
+
+
+
+
+
+
+
+let validators = null;
+function getValidators() {
+    if (validators === null) {
+        const ajv = new _2020.Ajv2020({ allErrors: true, strict: true, allowUnionTypes: true });
+        validators = { ready: ajv.compile(readySchema), report: ajv.compile(reportSchema) };
+    }
+    return validators;
+}
+/** Marker that replaces a bare NaN/Infinity token so the rest of a line can still be read. */
+const NON_FINITE = "\u0000non-finite:";
+const SECTIONS = ["steps", "evals", "states", "failed"];
+class ProcessSession {
+    settings;
+    options;
+    link = null;
+    readyMessage = null;
+    nextClientId = 0;
+    reports = 0;
+    queue = Promise.resolve();
+    now;
+    /** Runs ended in the last report of the previous `run` call, named in the next orders' `end`. */
+    ends = [];
+    label;
+    constructor(settings, options = {}) {
+        this.settings = settings;
+        this.options = options;
+        this.now = options.now ?? (() => performance.now());
+        this.label = `adapter ${JSON.stringify(settings.name)}`;
+    }
+    /** The handshake: starts the process if needed and returns what it serves. Throws a `ChildFault`. */
+    describe() {
+        return this.exclusive(() => this.ensureStarted());
+    }
+    /** Runs every request; resolves with their metrics in request order. Never rejects for client faults. */
+    run(requests) {
+        return this.exclusive(() => this.runAll(requests));
+    }
+    /** Says bye and waits for the process to exit (killing it after a grace period). */
+    close() {
+        return this.exclusive(async () => {
+            const link = this.link;
+            this.link = null;
+            if (link !== null) {
+                const bye = JSON.stringify({ type: "bye" });
+                if (link.alive)
+                    this.options.onLine?.("out", bye);
+                await link.close(bye);
+            }
+        });
+    }
+    /** Process id of the current child (tests). */
+    get pid() {
+        return this.link?.pid;
+    }
+    /** The tail of the current (or last) child's stderr. */
+    stderrTail() {
+        return this.link?.stderrTail() ?? "";
+    }
+    exclusive(task) {
+        const result = this.queue.then(task, task);
+        this.queue = result.catch(() => { });
+        return result;
+    }
+    async ensureStarted() {
+        if (this.link !== null && this.link.alive && this.readyMessage !== null)
+            return this.readyMessage;
+        if (this.link !== null)
+            this.link.kill();
+        const s = this.settings;
+        if (!(0,external_node_fs_.existsSync)(s.cwd)) {
+            throw new child/* ChildFault */.X_(`${this.label}: the working directory ${(0,child/* quoteLine */.tQ)(s.cwd)} does not exist (adapters.${s.name}.cwd)`);
+        }
+        const link = new child/* ChildLink */.rl({
+            command: s.command,
+            cwd: s.cwd,
+            env: minimalEnvironment(this.options.parentEnv ?? process.env, s.env),
+            maxLineBytes: s.maxMessageBytes,
+            label: this.label,
+        });
+        this.link = link;
+        this.readyMessage = null;
+        this.ends = [];
+        this.reports = 0;
+        const hello = {
+            type: "hello",
+            protocols: [...PROTOCOL_VERSIONS],
+            harness: `${version/* TOOL_NAME */.l} ${version/* TOOL_VERSION */.w}`,
+        };
+        let line;
+        try {
+            line = await this.exchange(link, JSON.stringify(hello), s.timeouts.start, "ready message (handshake)");
+        }
+        catch (err) {
+            throw this.withStderr(err, link);
+        }
+        const fail = (why) => {
+            link.kill();
+            return this.withStderr(new child/* ChildFault */.X_(`${this.label}: handshake failed: ${why}`), link);
+        };
+        let message;
+        try {
+            message = JSON.parse(line);
+        }
+        catch {
+            throw fail(`the first line is not JSON: ${(0,child/* quoteLine */.tQ)(line)}`);
+        }
+        const { ready } = getValidators();
+        if (!ready(message))
+            throw fail(`the first line is not a ready message (${ajvText(ready.errors)}): ${(0,child/* quoteLine */.tQ)(line)}`);
+        const msg = message;
+        if (!PROTOCOL_VERSIONS.includes(msg.protocol)) {
+            throw fail(`protocol ${msg.protocol} is not spoken here (harness speaks ${PROTOCOL_VERSIONS.join(", ")})`);
+        }
+        const names = new Set();
+        for (const o of msg.optimizers) {
+            if (names.has(o.name))
+                throw fail(`optimizer ${JSON.stringify(o.name)} is listed twice`);
+            names.add(o.name);
+        }
+        this.readyMessage = msg;
+        return msg;
+    }
+    async exchange(link, out, seconds, waitingFor) {
+        const tap = this.options.onLine;
+        if (tap === undefined)
+            return link.exchange(out, seconds, waitingFor);
+        tap("out", out);
+        const line = await link.exchange(out, seconds, waitingFor);
+        tap("in", line);
+        return line;
+    }
+    withStderr(fault, link = this.link) {
+        const tail = link?.stderrTail() ?? "";
+        return tail === "" ? fault : new child/* ChildFault */.X_(`${fault.reason}\nstderr (last lines):\n${tail}`);
+    }
+    async runAll(requests) {
+        const results = new Array(requests.length);
+        const index = new Map();
+        const settle = (run) => {
+            results[index.get(run)] = run.metrics;
+        };
+        // Two lanes when there is room: the client works on one lane's orders while the harness works on
+        // the other's report. Each lane is strictly request/reply; the client answers orders in the order
+        // received, so the sequence of messages (and every decision) does not depend on timing.
+        const max = this.settings.maxRuns;
+        const lanes = (max >= 2 ? [Math.ceil(max / 2), Math.floor(max / 2)] : [max]).map((capacity) => ({
+            capacity,
+            active: new Map(),
+            turn: new Turn([]),
+        }));
+        lanes[0].turn.end.push(...this.ends);
+        this.ends = [];
+        let next = 0;
+        const inFlight = () => lanes.reduce((n, lane) => n + lane.active.size, 0);
+        const fill = (lane) => {
+            while (lane.active.size < lane.capacity && next < requests.length) {
+                const run = new ProtocolRun(requests[next], this.now);
+                index.set(run, next++);
+                if (run.begin() !== null) {
+                    settle(run);
+                    continue;
+                }
+                const id = this.nextClientId++;
+                lane.turn.start.push(run.startEntry(id));
+                lane.turn.served.add(id);
+                lane.active.set(id, run);
+            }
+        };
+        while (next < requests.length || inFlight() > 0) {
+            if (inFlight() === 0 && (this.link === null || !this.link.alive || this.readyMessage === null)) {
+                try {
+                    await this.ensureStarted();
+                }
+                catch (err) {
+                    const reason = err instanceof child/* ChildFault */.X_ ? err.reason : String(err);
+                    for (; next < requests.length; next++) {
+                        const run = new ProtocolRun(requests[next], this.now);
+                        index.set(run, next);
+                        if (run.begin() === null)
+                            run.fail(reason);
+                        settle(run);
+                    }
+                    break;
+                }
+                for (const lane of lanes)
+                    lane.turn = new Turn([]);
+            }
+            const link = this.link;
+            const waiting = [];
+            const send = (lane) => {
+                fill(lane);
+                if (lane.active.size === 0)
+                    return;
+                const text = lane.turn.message(lane.active);
+                this.options.onLine?.("out", text);
+                link.send(text);
+                waiting.push(lane);
+            };
+            lanes.forEach(send);
+            let fault = null;
+            while (waiting.length > 0) {
+                const lane = waiting.shift();
+                let line;
+                try {
+                    line = await link.next(this.settings.timeouts.message, "report");
+                }
+                catch (err) {
+                    fault = this.withStderr(err, link).reason;
+                    break;
+                }
+                this.options.onLine?.("in", line);
+                this.reports++;
+                const following = new Turn([]);
+                const processFault = this.processReport(line, lane.turn, following, lane.active, settle);
+                if (processFault !== null) {
+                    link.kill();
+                    fault = this.withStderr(new child/* ChildFault */.X_(processFault), link).reason;
+                    break;
+                }
+                lane.turn = following;
+                send(lane);
+            }
+            if (fault !== null) {
+                for (const lane of lanes) {
+                    this.faultAll(lane.active, fault, settle);
+                    lane.turn = new Turn([]);
+                }
+            }
+        }
+        // Runs ended in the last reports are still known to the client: name them in the next orders.
+        for (const lane of lanes)
+            this.ends.push(...lane.turn.end);
+        return results;
+    }
+    faultAll(active, reason, settle) {
+        for (const run of active.values()) {
+            run.fail(reason);
+            settle(run);
+        }
+        active.clear();
+    }
+    /**
+     * Applies one report to the runs and assembles the next orders in `next`. Run-level faults end single
+     * runs; returns the reason of a fault that concerns the whole process (the caller then stops it).
+     */
+    processReport(line, turn, next, active, settle) {
+        const where = `${this.label}: report ${this.reports}`;
+        let data;
+        try {
+            data = JSON.parse(line);
+        }
+        catch {
+            data = parseWithNonFinite(line);
+            if (data === undefined) {
+                return `${where} is not JSON (stdout must carry protocol messages only; write diagnostics to stderr): ${(0,child/* quoteLine */.tQ)(line)}`;
+            }
+        }
+        if (data === null ||
+            typeof data !== "object" ||
+            Array.isArray(data) ||
+            data.type !== "report") {
+            return `${where} is not a protocol report (expected a JSON object with "type": "report"): ${(0,child/* quoteLine */.tQ)(line)}`;
+        }
+        const report = data;
+        const endRun = (id, reason) => {
+            const run = active.get(id);
+            if (run !== undefined && run.status !== "ended")
+                run.fail(reason);
+        };
+        const isOver = (id) => active.get(id).status === "ended";
+        // Schema check; an error inside one entry ends that entry's run only.
+        const { report: validate } = getValidators();
+        if (!validate(report)) {
+            const bad = new Map();
+            for (const e of validate.errors ?? []) {
+                const m = /^\/(steps|evals|states|failed)\/(\d+)(.*)$/.exec(e.instancePath);
+                const section = m?.[1];
+                const list = section !== undefined ? report[section] : undefined;
+                const entry = Array.isArray(list) && m ? list[Number(m[2])] : undefined;
+                const id = entry?.run;
+                if (m === null || section === undefined || typeof id !== "number" || !active.has(id)) {
+                    return `${where} is not a valid report: ${e.instancePath || "the message"} ${e.message}: ${(0,child/* quoteLine */.tQ)(line)}`;
+                }
+                const path = `${section}[${m[2]}]${jsonPointerToPath(m[3])}`;
+                const value = valueAt(entry, m[3]);
+                const detail = typeof value === "string" && value.startsWith(NON_FINITE)
+                    ? `is ${value.slice(NON_FINITE.length)}, which JSON cannot carry (send null for a point that is not finite)`
+                    : `${e.message}, got ${(0,child/* quoteLine */.tQ)(JSON.stringify(value) ?? "nothing")}`;
+                endRun(id, `${where}: ${path} of run ${id} ${detail}`);
+                let set = bad.get(section);
+                if (set === undefined)
+                    bad.set(section, (set = new Set()));
+                set.add(Number(m[2]));
+            }
+            for (const [section, indices] of bad) {
+                const kept = report[section].filter((_, i) => !indices.has(i));
+                report[section] = kept;
+            }
+        }
+        const msg = report;
+        // Every id must be a run in flight; anything else is a client bug that confuses all runs.
+        for (const section of SECTIONS) {
+            for (const entry of (msg[section] ?? [])) {
+                if (!active.has(entry.run)) {
+                    return `${where}: ${section} names run ${entry.run}, which is not in flight: ${(0,child/* quoteLine */.tQ)(line)}`;
+                }
+            }
+        }
+        const addressed = new Set();
+        const stepped = new Set();
+        const evaluated = new Set();
+        (msg.steps ?? []).forEach((entry, i) => {
+            const id = entry.run;
+            addressed.add(id);
+            if (isOver(id))
+                return;
+            const run = active.get(id);
+            if (stepped.has(id))
+                return endRun(id, `${where}: steps[${i}] is a second step of run ${id} in one report`);
+            stepped.add(id);
+            if (!turn.served.has(id)) {
+                return endRun(id, `${where}: steps[${i}] reports a step of run ${id}, which is paused after step ${run.k}`);
+            }
+            if (entry.x !== null && entry.x.length !== run.dim) {
+                return endRun(id, `${where}: steps[${i}].x of run ${id} has ${entry.x.length} numbers, expected ${run.dim}`);
+            }
+            const status = run.onStep(entry.x);
+            if (entry.eval === true && status !== "ended") {
+                if (status === "paused") {
+                    return endRun(id, `${where}: steps[${i}] of run ${id} asks for an evaluation after pausing at step ${run.k}`);
+                }
+                evaluated.add(id);
+                const values = run.onEval("iterate");
+                if (values !== null)
+                    next.answer(id, values);
+            }
+        });
+        (msg.evals ?? []).forEach((entry, i) => {
+            const id = entry.run;
+            addressed.add(id);
+            if (isOver(id))
+                return;
+            const run = active.get(id);
+            if (evaluated.has(id))
+                return endRun(id, `${where}: evals[${i}] is a second evaluation request of run ${id} in one report`);
+            evaluated.add(id);
+            if (run.status === "paused" || !turn.served.has(id)) {
+                return endRun(id, `${where}: evals[${i}] asks for an evaluation for run ${id}, which is paused after step ${run.k}`);
+            }
+            if (entry.x !== null && entry.x.length !== run.dim) {
+                return endRun(id, `${where}: evals[${i}].x of run ${id} has ${entry.x.length} numbers, expected ${run.dim}`);
+            }
+            const values = run.onEval(entry.x);
+            if (values !== null)
+                next.answer(id, values);
+        });
+        (msg.failed ?? []).forEach((entry) => {
+            addressed.add(entry.run);
+            if (!isOver(entry.run))
+                active.get(entry.run).onFailed(entry.phase, truncate(entry.message, 500));
+        });
+        (msg.states ?? []).forEach((entry, i) => {
+            const id = entry.run;
+            addressed.add(id);
+            if (isOver(id))
+                return;
+            const run = active.get(id);
+            if (!run.awaitingState)
+                return endRun(id, `${where}: states[${i}] carries a state of run ${id}, which was not asked for`);
+            run.awaitingState = false;
+            run.status = "running";
+            // The run goes on in a fresh instance that imports the state (resume scenario).
+            next.end.push(id);
+            active.delete(id);
+            const fresh = this.nextClientId++;
+            next.start.push(run.startEntry(fresh, entry.state));
+            next.served.add(fresh);
+            active.set(fresh, run);
+        });
+        // Runs that were given something must answer; paused runs must send the state asked for.
+        for (const id of turn.served) {
+            if (active.has(id) && !addressed.has(id) && !isOver(id)) {
+                endRun(id, `${where} says nothing about run ${id} (expected a step, an evaluation request or a failure)`);
+            }
+        }
+        for (const id of turn.exportState) {
+            const run = active.get(id);
+            if (run !== undefined && run.awaitingState && run.status !== "ended") {
+                endRun(id, `${where} does not carry the state of run ${id}, asked for after step ${run.k}`);
+            }
+        }
+        const now = this.now();
+        const limit = this.settings.timeouts.run;
+        for (const [id, run] of active) {
+            if (run.status !== "ended" && now - run.startedAt > limit * 1000) {
+                endRun(id, `${this.label}: run time-out: run ${id} still going after ${limit} s (timeouts.run), at step ${run.k}`);
+            }
+            if (run.status === "ended") {
+                active.delete(id);
+                next.end.push(id);
+                settle(run);
+            }
+            else if (run.status === "paused") {
+                if (stepped.has(id))
+                    this.atPause(run, id, next);
+            }
+            else if (!evaluated.has(id) && stepped.has(id)) {
+                // A step without an evaluation request: the run waits until the next orders resume it.
+                next.resume.push({ run: id });
+                next.served.add(id);
+            }
+        }
+        return null;
+    }
+    /** A run reached its pause point: put the scenario's action in the next orders. */
+    atPause(run, id, next) {
+        const action = run.request.control?.action;
+        if (action?.kind === "restart") {
+            run.awaitingState = true;
+            next.exportState.push(id);
+            return;
+        }
+        run.status = "running";
+        next.resume.push(action?.kind === "lr" ? { run: id, lr: action.lr } : { run: id });
+        next.served.add(id);
+    }
+}
+/** One orders message being assembled, and the client runs it serves. */
+class Turn {
+    end;
+    start = [];
+    /** Values entries as JSON text (built without intermediate objects: the hot path). */
+    values = [];
+    resume = [];
+    exportState = [];
+    /** Client run ids that must be answered in the report to this turn. */
+    served = new Set();
+    constructor(end) {
+        this.end = end;
+    }
+    answer(run, text) {
+        this.values.push({ run, text });
+        this.served.add(run);
+    }
+    /** The message as one JSON line; entries of runs that ended meanwhile are left out. */
+    message(active) {
+        const live = (id) => {
+            const status = active.get(id)?.status;
+            return status === "running" || status === "paused";
+        };
+        // Joined once at the end: one flat string, cheaper to write than a long chain of concatenations.
+        const parts = ['{"type":"orders"'];
+        if (this.end.length > 0)
+            parts.push(`,"end":${JSON.stringify(this.end)}`);
+        if (this.start.length > 0)
+            parts.push(`,"start":${JSON.stringify(this.start)}`);
+        let first = true;
+        for (const v of this.values) {
+            if (!live(v.run))
+                continue;
+            parts.push(first ? ',"values":[' : ",", v.text);
+            first = false;
+        }
+        if (!first)
+            parts.push("]");
+        const resume = this.resume.filter((r) => live(r.run));
+        if (resume.length > 0)
+            parts.push(`,"resume":${JSON.stringify(resume)}`);
+        const exportState = this.exportState.filter(live);
+        if (exportState.length > 0)
+            parts.push(`,"exportState":${JSON.stringify(exportState)}`);
+        parts.push("}");
+        return parts.join("");
+    }
+}
+function truncate(text, max) {
+    return text.length > max ? text.slice(0, max - 3) + "..." : text;
+}
+function ajvText(errors) {
+    const e = errors?.[0];
+    return e === undefined ? "invalid" : `${e.instancePath || "the message"} ${e.message}`;
+}
+/** "/x/1" → ".x[1]". */
+function jsonPointerToPath(pointer) {
+    let out = "";
+    for (const part of pointer.split("/").slice(1))
+        out += /^\d+$/.test(part) ? `[${part}]` : `.${part}`;
+    return out;
+}
+function valueAt(data, pointer) {
+    let v = data;
+    for (const part of pointer.split("/").slice(1)) {
+        if (v === null || typeof v !== "object")
+            return undefined;
+        v = v[part];
+    }
+    return v;
+}
+/**
+ * Reads a line that failed JSON.parse once more with bare NaN, Infinity and -Infinity tokens (outside
+ * strings) replaced by marker strings, so that the runs whose points hold them can be named. Returns
+ * undefined when the line is not JSON even so.
+ */
+function parseWithNonFinite(line) {
+    if (!/NaN|Infinity/.test(line))
+        return undefined;
+    let out = "";
+    let inString = false;
+    let i = 0;
+    while (i < line.length) {
+        const c = line[i];
+        if (inString) {
+            out += c;
+            if (c === "\\") {
+                out += line[i + 1] ?? "";
+                i += 2;
+                continue;
+            }
+            if (c === '"')
+                inString = false;
+            i++;
+            continue;
+        }
+        if (c === '"') {
+            inString = true;
+            out += c;
+            i++;
+            continue;
+        }
+        const token = line.startsWith("-Infinity", i)
+            ? "-Infinity"
+            : line.startsWith("Infinity", i)
+                ? "Infinity"
+                : line.startsWith("NaN", i)
+                    ? "NaN"
+                    : null;
+        if (token !== null) {
+            out += JSON.stringify(NON_FINITE + token);
+            i += token.length;
+            continue;
+        }
+        out += c;
+        i++;
+    }
+    try {
+        return JSON.parse(out);
+    }
+    catch {
+        return undefined;
+    }
+}
+
+
+/***/ }),
+
+/***/ 2683:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   f: () => (/* binding */ parseUse)
+/* harmony export */ });
+/* unused harmony export RESERVED_ADAPTER_NAMES */
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4552);
+/**
+ * The spellings of `optimizers[].use` in a suite config, and their parser:
+ *
+ *   adam  |  reference:adam             a reference optimizer of gradgate itself
+ *   module:./opt/my-adam.mjs#myAdam     an export of an ES module (JavaScript), path relative to the
+ *                                       config file's directory; without "#name", the default export
+ *   py:adam                             optimizer "adam" served by the process adapter declared as
+ *                                       `adapters.py` in the same config
+ *
+ * "reference" and "module" are therefore reserved: no process adapter may take either name.
+ */
+
+/** Names a process adapter may not take. */
+const RESERVED_ADAPTER_NAMES = Object.freeze(["reference", "module"]);
+/** File extensions of TypeScript sources, which Node 20 cannot load without a build step. */
+const TYPESCRIPT = /\.(ts|mts|cts|tsx)$/i;
+/**
+ * Parses a `use` string. `adapters` are the process adapters the config declares; `where` locates the
+ * string for messages (e.g. `config gradgate.yml: optimizers[2].use`).
+ */
+function parseUse(use, adapters, where) {
+    const colon = use.indexOf(":");
+    if (colon < 0)
+        return { kind: "reference", name: use };
+    const prefix = use.slice(0, colon);
+    const rest = use.slice(colon + 1);
+    if (prefix === "reference")
+        return { kind: "reference", name: rest };
+    if (prefix === "module") {
+        const hash = rest.lastIndexOf("#");
+        const path = hash < 0 ? rest : rest.slice(0, hash);
+        const exportName = hash < 0 ? "default" : rest.slice(hash + 1);
+        const form = `expected module:PATH#EXPORT, e.g. "module:./opt/my-adam.mjs#myAdam"`;
+        if (!(path.startsWith("./") || path.startsWith("../") || path.startsWith("/"))) {
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${where} ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(use)}: the module path must start with "./" or "../" (relative to the config file's directory) or "/"; ${form}`);
+        }
+        if (TYPESCRIPT.test(path)) {
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${where} ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(use)}: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(path)} is TypeScript, which Node 20 cannot load directly; ` +
+                `compile it to JavaScript first (e.g. tsc) and name the .js or .mjs file (see docs/adapters.md)`);
+        }
+        if (!/^[A-Za-z_$][A-Za-z0-9_$]*$/.test(exportName)) {
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${where} ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(use)}: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(exportName)} is not an export name; ${form}`);
+        }
+        return { kind: "module", path, exportName };
+    }
+    if (adapters.includes(prefix)) {
+        if (rest === "")
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${where} ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(use)}: name the optimizer after "${prefix}:"`);
+        return { kind: "process", adapter: prefix, optimizer: rest };
+    }
+    const declared = adapters.length > 0 ? adapters.join(", ") : "none";
+    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${where} ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(use)}: ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(prefix)} is neither "reference", "module" nor a process adapter declared under adapters (declared: ${declared})`);
+}
+
+
+/***/ }),
+
 /***/ 4552:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
@@ -8324,11 +9956,37 @@ function quote(value) {
 /* harmony export */ });
 /**
  * Canonical JSON: object keys sorted, arrays in order, numbers in JavaScript's shortest round-trip
- * form, two-space indentation and a final newline. The same value always gives the same bytes, so
- * results and baselines diff cleanly and equal runs compare byte for byte.
+ * form, two-space indentation and a final newline; an array of plain values (numbers, strings, null,
+ * booleans) stays on one line, so a run's trace or iterate is one line of a diff. The same value always
+ * gives the same bytes, so results and baselines diff cleanly and equal runs compare byte for byte.
  */
 function canonicalJson(value) {
-    return JSON.stringify(sortKeys(value), null, 2) + "\n";
+    return write(sortKeys(value), "") + "\n";
+}
+function isPlain(v) {
+    return v === null || typeof v !== "object";
+}
+function write(value, indent) {
+    if (Array.isArray(value)) {
+        if (value.length === 0)
+            return "[]";
+        if (value.every(isPlain))
+            return "[" + value.map((v) => JSON.stringify(v)).join(", ") + "]";
+        const inner = indent + "  ";
+        return "[\n" + value.map((v) => inner + write(v, inner)).join(",\n") + "\n" + indent + "]";
+    }
+    if (value !== null && typeof value === "object") {
+        const entries = Object.entries(value);
+        if (entries.length === 0)
+            return "{}";
+        const inner = indent + "  ";
+        return ("{\n" +
+            entries.map(([k, v]) => inner + JSON.stringify(k) + ": " + write(v, inner)).join(",\n") +
+            "\n" +
+            indent +
+            "}");
+    }
+    return JSON.stringify(value);
 }
 function sortKeys(value) {
     if (Array.isArray(value))
@@ -8549,22 +10207,17 @@ const TOOL_VERSION = "0.1.0";
 
 /***/ }),
 
-/***/ 3857:
+/***/ 650:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  r9: () => (/* binding */ OPTIMIZERS),
-  KH: () => (/* binding */ getOptimizer),
-  Vn: () => (/* reexport */ resolveHyper)
-});
-
-// UNUSED EXPORTS: OPTIMIZER_NAMES, adagrad, adam, adamw, defaultsOf, describeNumberSpec, hyperJsonSchema, momentum, nesterov, rmsprop, sgd
-
-// EXTERNAL MODULE: ./build/package/core/errors.js
-var errors = __nccwpck_require__(4552);
-;// CONCATENATED MODULE: ./build/package/optimizers/hyper.js
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   B: () => (/* binding */ defineOptimizer),
+/* harmony export */   N1: () => (/* binding */ checkLearningRate),
+/* harmony export */   Vn: () => (/* binding */ resolveHyper),
+/* harmony export */   rA: () => (/* binding */ checkIterate)
+/* harmony export */ });
+/* unused harmony exports defaultsOf, describeNumberSpec, checkDim, hyperJsonSchema */
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4552);
 /**
  * Hyperparameter specifications of the reference optimizers, and the one validator that applies them.
  *
@@ -8604,7 +10257,7 @@ function describeNumberSpec(spec) {
 }
 /** Quotes a bad value; numbers keep their JavaScript spelling (NaN and Infinity are not JSON). */
 function show(value) {
-    return typeof value === "number" ? String(value) : (0,errors/* quote */.h)(value);
+    return typeof value === "number" ? String(value) : (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(value);
 }
 function inRange(x, spec) {
     if (!Number.isFinite(x))
@@ -8625,17 +10278,17 @@ function checkValue(name, spec, value, where) {
     switch (spec.type) {
         case "number":
             if (typeof value !== "number" || !inRange(value, spec)) {
-                throw new errors/* InputError */.d(`${field} must be ${describeNumberSpec(spec)}, got ${show(value)}`);
+                throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${field} must be ${describeNumberSpec(spec)}, got ${show(value)}`);
             }
             return;
         case "boolean":
             if (typeof value !== "boolean")
-                throw new errors/* InputError */.d(`${field} must be true or false, got ${show(value)}`);
+                throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${field} must be true or false, got ${show(value)}`);
             return;
         case "choice":
             if (typeof value !== "string" || !spec.choices.includes(value)) {
                 const choices = spec.choices.map((c) => JSON.stringify(c)).join(", ");
-                throw new errors/* InputError */.d(`${field} must be one of ${choices}, got ${show(value)}`);
+                throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${field} must be one of ${choices}, got ${show(value)}`);
             }
             return;
     }
@@ -8653,14 +10306,14 @@ function resolveHyper(factory, given, where) {
     if (given === undefined || given === null)
         given = {};
     if (typeof given !== "object" || Array.isArray(given)) {
-        throw new errors/* InputError */.d(`${where} must be a mapping of hyperparameter names to values, got ${show(given)}`);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${where} must be a mapping of hyperparameter names to values, got ${show(given)}`);
     }
     const specs = factory.hyperSpecs;
     const known = Object.keys(specs);
     const values = given;
     for (const [name, value] of Object.entries(values)) {
         if (!Object.prototype.hasOwnProperty.call(specs, name)) {
-            throw new errors/* InputError */.d(`${where}.${name} is not a hyperparameter of ${factory.name} (known: ${known.join(", ")})`);
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${where}.${name} is not a hyperparameter of ${factory.name} (known: ${known.join(", ")})`);
         }
         checkValue(name, specs[name], value, where);
     }
@@ -8676,14 +10329,14 @@ function resolveHyper(factory, given, where) {
 /** Throws unless `dim` is a positive integer (the problem dimension handed to `create`). */
 function checkDim(dim, who) {
     if (typeof dim !== "number" || !Number.isInteger(dim) || dim < 1) {
-        throw new errors/* InputError */.d(`${who}: dim must be a positive integer, got ${show(dim)}`);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: dim must be a positive integer, got ${show(dim)}`);
     }
     return dim;
 }
 /** Throws unless `lr` is a positive finite number (for `setLearningRate`). */
 function checkLearningRate(lr, who) {
     if (typeof lr !== "number" || !Number.isFinite(lr) || !(lr > 0)) {
-        throw new errors/* InputError */.d(`${who}: lr must be a positive number, got ${show(lr)}`);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: lr must be a positive number, got ${show(lr)}`);
     }
     return lr;
 }
@@ -8747,85 +10400,35 @@ function hyperJsonSchema(factory) {
     };
 }
 
-;// CONCATENATED MODULE: ./build/package/optimizers/state.js
-/**
- * Export and import of a reference optimizer's state, for resuming a run in a fresh instance.
- *
- * A state is a flat JSON-safe record: `step` (the step counter, a nonnegative integer), `lr` (the
- * current learning rate, which `setLearningRate` may have changed) and one array of `dim` finite
- * numbers per internal buffer (moments, velocity, accumulator). Each optimizer names its keys in a
- * layout; an import is checked completely against that layout before anything is copied, so a
- * rejected state leaves the instance untouched. Keys differ between forms whose buffers mean
- * different things (e.g. momentum's `velocity` vs `buffer`), so a state cannot be resumed by the wrong
- * form by accident.
- *
- * Cost: O(dim · number of buffers); never called inside a step.
- */
 
-/** Quotes a bad value; numbers (also inside arrays) keep their JavaScript spelling, so NaN shows as NaN. */
-function state_show(value) {
-    if (typeof value === "number")
-        return String(value);
-    if (Array.isArray(value)) {
-        const text = `[${value.map((v) => (typeof v === "number" ? String(v) : (0,errors/* quote */.h)(v))).join(",")}]`;
-        return text.length > 80 ? text.slice(0, 77) + "..." : text;
-    }
-    return (0,errors/* quote */.h)(value);
-}
-/**
- * Throws an `InputError` unless `state` matches `layout` exactly: no missing or unknown keys, counts
- * are nonnegative integers, `lr` is a positive finite number, vectors are arrays of `dim` finite numbers.
- * `who` names the caller, e.g. `importState adam`.
- */
-function checkState(state, layout, dim, who) {
-    const expected = Object.keys(layout);
-    if (state === null || typeof state !== "object" || Array.isArray(state)) {
-        throw new errors/* InputError */.d(`${who}: state must be an object with keys ${expected.join(", ")}, got ${state_show(state)}`);
-    }
-    const record = state;
-    for (const key of Object.keys(record)) {
-        if (!Object.prototype.hasOwnProperty.call(layout, key)) {
-            throw new errors/* InputError */.d(`${who}: state.${key} is not part of this optimizer's state (expected: ${expected.join(", ")})`);
-        }
-    }
-    for (const key of expected) {
-        if (!Object.prototype.hasOwnProperty.call(record, key)) {
-            throw new errors/* InputError */.d(`${who}: state.${key} is missing (expected: ${expected.join(", ")})`);
-        }
-        const value = record[key];
-        switch (layout[key]) {
-            case "count":
-                if (typeof value !== "number" || !Number.isSafeInteger(value) || value < 0) {
-                    throw new errors/* InputError */.d(`${who}: state.${key} must be a nonnegative integer, got ${state_show(value)}`);
-                }
-                break;
-            case "lr":
-                if (typeof value !== "number" || !Number.isFinite(value) || !(value > 0)) {
-                    throw new errors/* InputError */.d(`${who}: state.${key} must be a positive number, got ${state_show(value)}`);
-                }
-                break;
-            case "vector":
-                if (!Array.isArray(value) ||
-                    value.length !== dim ||
-                    !value.every((v) => typeof v === "number" && Number.isFinite(v))) {
-                    throw new errors/* InputError */.d(`${who}: state.${key} must be an array of ${dim} finite numbers, got ${state_show(value)}`);
-                }
-                break;
-        }
-    }
-    return record;
-}
-/** Copies a checked state vector into an instance buffer. */
-function loadVector(state, key, into) {
-    const values = state[key];
-    for (let i = 0; i < into.length; i++)
-        into[i] = values[i];
-}
-/** A buffer as a plain array (JSON-safe, exact: doubles round-trip through JSON text). */
-function saveVector(buffer) {
-    return Array.from(buffer);
-}
+/***/ }),
 
+/***/ 2551:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  r9: () => (/* binding */ OPTIMIZERS),
+  bw: () => (/* reexport */ adagrad),
+  Ch: () => (/* reexport */ adam),
+  dp: () => (/* reexport */ adamw),
+  KH: () => (/* binding */ getOptimizer),
+  Pg: () => (/* reexport */ momentum),
+  fX: () => (/* reexport */ nesterov),
+  Vn: () => (/* reexport */ hyper/* resolveHyper */.Vn),
+  m0: () => (/* reexport */ rmsprop),
+  D5: () => (/* reexport */ sgd)
+});
+
+// UNUSED EXPORTS: OPTIMIZER_NAMES, defaultsOf, describeNumberSpec, hyperJsonSchema
+
+// EXTERNAL MODULE: ./build/package/core/errors.js
+var errors = __nccwpck_require__(4552);
+// EXTERNAL MODULE: ./build/package/optimizers/hyper.js
+var hyper = __nccwpck_require__(650);
+// EXTERNAL MODULE: ./build/package/optimizers/state.js
+var optimizers_state = __nccwpck_require__(6425);
 ;// CONCATENATED MODULE: ./build/package/optimizers/adagrad.js
 
 
@@ -8873,7 +10476,7 @@ class Adagrad {
         this.weightDecay = hyper.weightDecay;
     }
     step(x, oracle) {
-        checkIterate(x, this.dim, "adagrad");
+        (0,hyper/* checkIterate */.rA)(x, this.dim, "adagrad");
         const g = this.grad;
         const G = this.sumSquares;
         oracle.evaluate(x, g);
@@ -8889,19 +10492,19 @@ class Adagrad {
         this.t++;
     }
     exportState() {
-        return { step: this.t, lr: this.lr, sumSquares: saveVector(this.sumSquares) };
+        return { step: this.t, lr: this.lr, sumSquares: (0,optimizers_state/* saveVector */.js)(this.sumSquares) };
     }
     importState(state) {
-        const s = checkState(state, LAYOUT, this.dim, "importState adagrad");
+        const s = (0,optimizers_state/* checkState */.We)(state, LAYOUT, this.dim, "importState adagrad");
         this.t = s.step;
         this.lr = s.lr;
-        loadVector(s, "sumSquares", this.sumSquares);
+        (0,optimizers_state/* loadVector */.YW)(s, "sumSquares", this.sumSquares);
     }
     setLearningRate(lr) {
-        this.lr = checkLearningRate(lr, "setLearningRate adagrad");
+        this.lr = (0,hyper/* checkLearningRate */.N1)(lr, "setLearningRate adagrad");
     }
 }
-const adagrad = defineOptimizer({
+const adagrad = (0,hyper/* defineOptimizer */.B)({
     name: "adagrad",
     title: "Adagrad, diagonal (Duchi, Hazan & Singer 2011, JMLR 12:2121–2159)",
     hyperSpecs: ADAGRAD_HYPER,
@@ -9067,7 +10670,7 @@ class AdamFamily {
             : { step: "count", lr: "lr", m: "vector", v: "vector" };
     }
     step(x, oracle) {
-        checkIterate(x, this.dim, this.name);
+        (0,hyper/* checkIterate */.rA)(x, this.dim, this.name);
         const g = this.grad;
         const m = this.m;
         const v = this.v;
@@ -9130,25 +10733,25 @@ class AdamFamily {
         this.t = t;
     }
     exportState() {
-        const state = { step: this.t, lr: this.lr, m: saveVector(this.m), v: saveVector(this.v) };
+        const state = { step: this.t, lr: this.lr, m: (0,optimizers_state/* saveVector */.js)(this.m), v: (0,optimizers_state/* saveVector */.js)(this.v) };
         if (this.amsgrad)
-            state[this.maxKey] = saveVector(this.vMax);
+            state[this.maxKey] = (0,optimizers_state/* saveVector */.js)(this.vMax);
         return state;
     }
     importState(state) {
-        const s = checkState(state, this.layout, this.dim, `importState ${this.name}`);
+        const s = (0,optimizers_state/* checkState */.We)(state, this.layout, this.dim, `importState ${this.name}`);
         this.t = s.step;
         this.lr = s.lr;
-        loadVector(s, "m", this.m);
-        loadVector(s, "v", this.v);
+        (0,optimizers_state/* loadVector */.YW)(s, "m", this.m);
+        (0,optimizers_state/* loadVector */.YW)(s, "v", this.v);
         if (this.amsgrad)
-            loadVector(s, this.maxKey, this.vMax);
+            (0,optimizers_state/* loadVector */.YW)(s, this.maxKey, this.vMax);
     }
     setLearningRate(lr) {
-        this.lr = checkLearningRate(lr, `setLearningRate ${this.name}`);
+        this.lr = (0,hyper/* checkLearningRate */.N1)(lr, `setLearningRate ${this.name}`);
     }
 }
-const adam = defineOptimizer({
+const adam = (0,hyper/* defineOptimizer */.B)({
     name: "adam",
     title: "Adam (Kingma & Ba 2015, ICLR, arXiv:1412.6980); AMSGrad option (Reddi, Kale & Kumar 2018, ICLR)",
     hyperSpecs: ADAM_HYPER,
@@ -9195,7 +10798,7 @@ const ADAMW_HYPER = {
     },
     ...ADAM_VARIANT_HYPER,
 };
-const adamw = defineOptimizer({
+const adamw = (0,hyper/* defineOptimizer */.B)({
     name: "adamw",
     title: "AdamW, decoupled weight decay (Loshchilov & Hutter 2019, ICLR, arXiv:1711.05101)",
     hyperSpecs: ADAMW_HYPER,
@@ -9258,7 +10861,7 @@ class Momentum {
         this.layout = { step: "count", lr: "lr", [this.key]: "vector" };
     }
     step(w, oracle) {
-        checkIterate(w, this.dim, "momentum");
+        (0,hyper/* checkIterate */.rA)(w, this.dim, "momentum");
         const g = this.grad;
         const b = this.buf;
         oracle.evaluate(w, g);
@@ -9282,19 +10885,19 @@ class Momentum {
         this.t++;
     }
     exportState() {
-        return { step: this.t, lr: this.lr, [this.key]: saveVector(this.buf) };
+        return { step: this.t, lr: this.lr, [this.key]: (0,optimizers_state/* saveVector */.js)(this.buf) };
     }
     importState(state) {
-        const s = checkState(state, this.layout, this.dim, "importState momentum");
+        const s = (0,optimizers_state/* checkState */.We)(state, this.layout, this.dim, "importState momentum");
         this.t = s.step;
         this.lr = s.lr;
-        loadVector(s, this.key, this.buf);
+        (0,optimizers_state/* loadVector */.YW)(s, this.key, this.buf);
     }
     setLearningRate(lr) {
-        this.lr = checkLearningRate(lr, "setLearningRate momentum");
+        this.lr = (0,hyper/* checkLearningRate */.N1)(lr, "setLearningRate momentum");
     }
 }
-const momentum = defineOptimizer({
+const momentum = (0,hyper/* defineOptimizer */.B)({
     name: "momentum",
     title: "Heavy-ball momentum (Polyak 1964, USSR Comput. Math. Math. Phys. 4(5):1–17)",
     hyperSpecs: MOMENTUM_HYPER,
@@ -9356,7 +10959,7 @@ class Nesterov {
         this.weightDecay = hyper.weightDecay;
     }
     step(x, oracle) {
-        checkIterate(x, this.dim, "nesterov");
+        (0,hyper/* checkIterate */.rA)(x, this.dim, "nesterov");
         const g = this.grad;
         const v = this.velocity;
         const lr = this.lr;
@@ -9385,19 +10988,19 @@ class Nesterov {
         this.t++;
     }
     exportState() {
-        return { step: this.t, lr: this.lr, velocity: saveVector(this.velocity) };
+        return { step: this.t, lr: this.lr, velocity: (0,optimizers_state/* saveVector */.js)(this.velocity) };
     }
     importState(state) {
-        const s = checkState(state, nesterov_LAYOUT, this.dim, "importState nesterov");
+        const s = (0,optimizers_state/* checkState */.We)(state, nesterov_LAYOUT, this.dim, "importState nesterov");
         this.t = s.step;
         this.lr = s.lr;
-        loadVector(s, "velocity", this.velocity);
+        (0,optimizers_state/* loadVector */.YW)(s, "velocity", this.velocity);
     }
     setLearningRate(lr) {
-        this.lr = checkLearningRate(lr, "setLearningRate nesterov");
+        this.lr = (0,hyper/* checkLearningRate */.N1)(lr, "setLearningRate nesterov");
     }
 }
-const nesterov = defineOptimizer({
+const nesterov = (0,hyper/* defineOptimizer */.B)({
     name: "nesterov",
     title: "Nesterov's accelerated gradient, momentum form (Nesterov 1983; Sutskever et al. 2013, ICML)",
     hyperSpecs: NESTEROV_HYPER,
@@ -9462,7 +11065,7 @@ class RmsProp {
         this.weightDecay = hyper.weightDecay;
     }
     step(x, oracle) {
-        checkIterate(x, this.dim, "rmsprop");
+        (0,hyper/* checkIterate */.rA)(x, this.dim, "rmsprop");
         const g = this.grad;
         const E = this.meanSquare;
         oracle.evaluate(x, g);
@@ -9480,19 +11083,19 @@ class RmsProp {
         this.t++;
     }
     exportState() {
-        return { step: this.t, lr: this.lr, meanSquare: saveVector(this.meanSquare) };
+        return { step: this.t, lr: this.lr, meanSquare: (0,optimizers_state/* saveVector */.js)(this.meanSquare) };
     }
     importState(state) {
-        const s = checkState(state, rmsprop_LAYOUT, this.dim, "importState rmsprop");
+        const s = (0,optimizers_state/* checkState */.We)(state, rmsprop_LAYOUT, this.dim, "importState rmsprop");
         this.t = s.step;
         this.lr = s.lr;
-        loadVector(s, "meanSquare", this.meanSquare);
+        (0,optimizers_state/* loadVector */.YW)(s, "meanSquare", this.meanSquare);
     }
     setLearningRate(lr) {
-        this.lr = checkLearningRate(lr, "setLearningRate rmsprop");
+        this.lr = (0,hyper/* checkLearningRate */.N1)(lr, "setLearningRate rmsprop");
     }
 }
-const rmsprop = defineOptimizer({
+const rmsprop = (0,hyper/* defineOptimizer */.B)({
     name: "rmsprop",
     title: "RMSProp (described in Graves 2013, arXiv:1308.0850 §4; Ruder 2016, arXiv:1609.04747 §4.5)",
     hyperSpecs: RMSPROP_HYPER,
@@ -9530,7 +11133,7 @@ class Sgd {
         this.weightDecay = hyper.weightDecay;
     }
     step(x, oracle) {
-        checkIterate(x, this.dim, "sgd");
+        (0,hyper/* checkIterate */.rA)(x, this.dim, "sgd");
         const g = this.grad;
         oracle.evaluate(x, g);
         const lr = this.lr;
@@ -9543,15 +11146,15 @@ class Sgd {
         return { step: this.t, lr: this.lr };
     }
     importState(state) {
-        const s = checkState(state, sgd_LAYOUT, this.dim, "importState sgd");
+        const s = (0,optimizers_state/* checkState */.We)(state, sgd_LAYOUT, this.dim, "importState sgd");
         this.t = s.step;
         this.lr = s.lr;
     }
     setLearningRate(lr) {
-        this.lr = checkLearningRate(lr, "setLearningRate sgd");
+        this.lr = (0,hyper/* checkLearningRate */.N1)(lr, "setLearningRate sgd");
     }
 }
-const sgd = defineOptimizer({
+const sgd = (0,hyper/* defineOptimizer */.B)({
     name: "sgd",
     title: "Gradient descent / SGD (Robbins & Monro 1951, Ann. Math. Statist. 22(3):400–407)",
     hyperSpecs: SGD_HYPER,
@@ -9599,6 +11202,96 @@ function getOptimizer(name, where = "optimizer name") {
         throw new errors/* InputError */.d(`${where} must name a reference optimizer (known: ${OPTIMIZER_NAMES.join(", ")}), got ${(0,errors/* quote */.h)(name)}`);
     }
     return found;
+}
+
+
+/***/ }),
+
+/***/ 6425:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   We: () => (/* binding */ checkState),
+/* harmony export */   YW: () => (/* binding */ loadVector),
+/* harmony export */   js: () => (/* binding */ saveVector)
+/* harmony export */ });
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4552);
+/**
+ * Export and import of a reference optimizer's state, for resuming a run in a fresh instance.
+ *
+ * A state is a flat JSON-safe record: `step` (the step counter, a nonnegative integer), `lr` (the
+ * current learning rate, which `setLearningRate` may have changed) and one array of `dim` finite
+ * numbers per internal buffer (moments, velocity, accumulator). Each optimizer names its keys in a
+ * layout; an import is checked completely against that layout before anything is copied, so a
+ * rejected state leaves the instance untouched. Keys differ between forms whose buffers mean
+ * different things (e.g. momentum's `velocity` vs `buffer`), so a state cannot be resumed by the wrong
+ * form by accident.
+ *
+ * Cost: O(dim · number of buffers); never called inside a step.
+ */
+
+/** Quotes a bad value; numbers (also inside arrays) keep their JavaScript spelling, so NaN shows as NaN. */
+function show(value) {
+    if (typeof value === "number")
+        return String(value);
+    if (Array.isArray(value)) {
+        const text = `[${value.map((v) => (typeof v === "number" ? String(v) : (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(v))).join(",")}]`;
+        return text.length > 80 ? text.slice(0, 77) + "..." : text;
+    }
+    return (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(value);
+}
+/**
+ * Throws an `InputError` unless `state` matches `layout` exactly: no missing or unknown keys, counts
+ * are nonnegative integers, `lr` is a positive finite number, vectors are arrays of `dim` finite numbers.
+ * `who` names the caller, e.g. `importState adam`.
+ */
+function checkState(state, layout, dim, who) {
+    const expected = Object.keys(layout);
+    if (state === null || typeof state !== "object" || Array.isArray(state)) {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state must be an object with keys ${expected.join(", ")}, got ${show(state)}`);
+    }
+    const record = state;
+    for (const key of Object.keys(record)) {
+        if (!Object.prototype.hasOwnProperty.call(layout, key)) {
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state.${key} is not part of this optimizer's state (expected: ${expected.join(", ")})`);
+        }
+    }
+    for (const key of expected) {
+        if (!Object.prototype.hasOwnProperty.call(record, key)) {
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state.${key} is missing (expected: ${expected.join(", ")})`);
+        }
+        const value = record[key];
+        switch (layout[key]) {
+            case "count":
+                if (typeof value !== "number" || !Number.isSafeInteger(value) || value < 0) {
+                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state.${key} must be a nonnegative integer, got ${show(value)}`);
+                }
+                break;
+            case "lr":
+                if (typeof value !== "number" || !Number.isFinite(value) || !(value > 0)) {
+                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state.${key} must be a positive number, got ${show(value)}`);
+                }
+                break;
+            case "vector":
+                if (!Array.isArray(value) ||
+                    value.length !== dim ||
+                    !value.every((v) => typeof v === "number" && Number.isFinite(v))) {
+                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state.${key} must be an array of ${dim} finite numbers, got ${show(value)}`);
+                }
+                break;
+        }
+    }
+    return record;
+}
+/** Copies a checked state vector into an instance buffer. */
+function loadVector(state, key, into) {
+    const values = state[key];
+    for (let i = 0; i < into.length; i++)
+        into[i] = values[i];
+}
+/** A buffer as a plain array (JSON-safe, exact: doubles round-trip through JSON text). */
+function saveVector(buffer) {
+    return Array.from(buffer);
 }
 
 
@@ -11392,1388 +13085,179 @@ function createProblem(name, params, ctx) {
 
 /***/ }),
 
-/***/ 3134:
+/***/ 8550:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   A: () => (/* binding */ RunBatch)
+/* harmony export */ });
+/* harmony import */ var _problems_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5006);
+/* harmony import */ var _adapters_session_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(9745);
+/* harmony import */ var _execute_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(5585);
+/* harmony import */ var _resolve_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(5966);
+/* harmony import */ var _scenarios_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(8857);
 
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  A: () => (/* binding */ RunBatch)
-});
 
-// EXTERNAL MODULE: ./build/package/problems/index.js + 22 modules
-var problems = __nccwpck_require__(5006);
-// EXTERNAL MODULE: external "node:fs"
-var external_node_fs_ = __nccwpck_require__(3024);
-// EXTERNAL MODULE: ./node_modules/ajv/dist/2020.js
-var _2020 = __nccwpck_require__(2210);
-// EXTERNAL MODULE: ./build/package/core/version.js
-var version = __nccwpck_require__(6063);
-// EXTERNAL MODULE: external "node:child_process"
-var external_node_child_process_ = __nccwpck_require__(1421);
-;// CONCATENATED MODULE: ./build/package/adapters/child.js
-/**
- * One optimizer process: spawned without a shell, with the minimal environment (./env.ts), spoken to
- * in JSON lines. Turns everything that can go wrong with a child into a `ChildFault` with a precise
- * reason: it could not start, it exited, it stayed silent past a time-out, a line was too long, a line
- * was not JSON. Keeps the tail of its stderr for error reports.
- *
- * Lines are read in order: `next` resolves with the child's next line (`exchange` = `send` + `next`).
- * A line that arrives when no reply is awaited is kept for the next `next` (where it is judged: it is
- * usually not the expected message).
- *
- * While no exchange is outstanding the child's handles are unreferenced, so an idle child never keeps
- * the harness (or a worker thread) alive; a child whose harness goes away reads end-of-file on stdin
- * and should exit.
- */
 
-/** Why the link to a child failed; `reason` is a complete sentence for the run's `error`. */
-class ChildFault extends Error {
-    reason;
-    name = "ChildFault";
-    constructor(reason) {
-        super(reason);
-        this.reason = reason;
-    }
-}
-/** At most this many characters of an offending line are quoted in a reason. */
-const QUOTE_CHARS = 120;
-/** Quotes a line from a child for an error message: JSON string syntax, truncated. */
-function quoteLine(line) {
-    const cut = line.length > QUOTE_CHARS ? line.slice(0, QUOTE_CHARS) : line;
-    return JSON.stringify(cut) + (line.length > QUOTE_CHARS ? ` (${line.length} characters, truncated)` : "");
-}
-class ChildLink {
-    options;
-    child;
-    chunks = [];
-    pendingBytes = 0;
-    lines = [];
-    waiter = null;
-    fault = null;
-    stderrText = "";
-    exited = false;
-    /** After an over-long line nothing more from this child is read. */
-    discarding = false;
-    /** Set by kill(): the child is being stopped and must not be used again. */
-    killed = false;
-    exitPromise;
-    /** Lines received so far (for messages). */
-    lineCount = 0;
-    constructor(options) {
-        this.options = options;
-        const [program, ...args] = options.command;
-        this.child = (0,external_node_child_process_.spawn)(program, args, {
-            cwd: options.cwd,
-            env: options.env,
-            stdio: ["pipe", "pipe", "pipe"],
-            shell: false,
-            windowsHide: true,
-            // Own process group, so a time-out can kill the child's own children too.
-            detached: process.platform !== "win32",
-        });
-        let markExited = () => { };
-        this.exitPromise = new Promise((resolve) => (markExited = resolve));
-        this.child.on("error", (err) => {
-            const what = err.code === "ENOENT"
-                ? `could not start ${quoteLine(program)}: not found (a bare name is looked up on PATH, a relative path ` +
-                    `from the working directory ${quoteLine(options.cwd)})`
-                : `could not start ${quoteLine(program)}: ${err.message}`;
-            this.setFault(new ChildFault(`${options.label}: ${what}`));
-            this.exited = true;
-            markExited();
-        });
-        // "close" comes once the output is drained too, so a last line written before exiting is still
-        // read; a grandchild holding the pipes open must not delay the fault for long, hence the timer.
-        const exitFault = (code, signal) => {
-            const how = signal !== null ? `was killed by ${signal}` : `exited with status ${code}`;
-            this.setFault(new ChildFault(`${options.label}: the process ${how}`));
-        };
-        this.child.on("exit", (code, signal) => {
-            this.exited = true;
-            markExited();
-            setTimeout(() => exitFault(code, signal), 500).unref();
-        });
-        this.child.on("close", (code, signal) => exitFault(code, signal));
-        this.child.stdout.on("data", (chunk) => this.onData(chunk));
-        this.child.stderr.setEncoding("utf8");
-        this.child.stderr.on("data", (text) => {
-            const keep = options.stderrKeep ?? 4000;
-            this.stderrText = (this.stderrText + text).slice(-keep);
-        });
-        // A child that exits early makes writes fail with EPIPE; the exit handler reports it.
-        this.child.stdin.on("error", () => { });
-        this.idle();
-    }
-    get pid() {
-        return this.child.pid;
-    }
-    get alive() {
-        return !this.exited && !this.killed && this.fault === null;
-    }
-    /** The last `lines` lines of stderr (at most `chars` characters), or "" if it wrote none. */
-    stderrTail(lines = 10, chars = 1000) {
-        const all = this.stderrText.replace(/\s+$/, "").split("\n");
-        return all.slice(-lines).join("\n").slice(-chars);
-    }
-    /**
-     * Writes `line` (a newline is added) and resolves with the child's next line. Rejects with a
-     * `ChildFault` when the child exits, writes a line that is too long, or stays silent `seconds`.
-     */
-    exchange(line, seconds, waitingFor) {
-        if (this.fault !== null)
-            return Promise.reject(this.fault);
-        this.send(line);
-        return this.next(seconds, waitingFor);
-    }
-    /** Writes `line` (a newline is added); a failed write shows up as the child's exit. */
-    send(line) {
-        if (this.fault !== null || this.killed)
-            return;
-        this.child.stdin.write(line + "\n");
-    }
-    /** Resolves with the next line (no write), with the same faults as `exchange`. */
-    next(seconds, waitingFor) {
-        if (this.lines.length > 0)
-            return Promise.resolve(this.lines.shift());
-        if (this.fault !== null)
-            return Promise.reject(this.fault);
-        this.busy();
-        return new Promise((resolve, reject) => {
-            const timer = setTimeout(() => {
-                this.waiter = null;
-                this.setFault(new ChildFault(`${this.options.label}: no ${waitingFor} within ${seconds} s (time-out); the process was stopped`));
-                this.kill();
-                reject(this.fault);
-            }, seconds * 1000);
-            this.waiter = {
-                resolve: (l) => {
-                    clearTimeout(timer);
-                    this.idle();
-                    resolve(l);
-                },
-                reject: (f) => {
-                    clearTimeout(timer);
-                    this.idle();
-                    reject(f);
-                },
-            };
-        });
-    }
-    /** Ends the session politely: writes `line`, closes stdin, kills after `graceSeconds`. */
-    async close(line, graceSeconds = 2) {
-        if (!this.exited) {
-            if (line !== null && this.fault === null)
-                this.child.stdin.write(line + "\n");
-            this.child.stdin.end();
-            const timer = setTimeout(() => this.kill(), graceSeconds * 1000);
-            this.busy();
-            await this.exitPromise;
-            clearTimeout(timer);
+
+
+class RunBatch {
+    suite;
+    optimizers = new Map();
+    problems = new Map();
+    sessions = new Map();
+    scratch;
+    starts = [];
+    total;
+    constructor(suite) {
+        this.suite = suite;
+        let n = 0;
+        for (const c of suite.cases) {
+            this.starts.push(n);
+            n += c.seeds;
         }
-        this.setFault(new ChildFault(`${this.options.label}: the process was closed`));
+        this.total = n;
     }
-    /** Kills the child (and its process group) at once. */
-    kill() {
-        this.killed = true;
-        this.discarding = true;
-        if (this.exited)
-            return;
-        const pid = this.child.pid;
-        try {
-            if (pid !== undefined && process.platform !== "win32")
-                process.kill(-pid, "SIGKILL");
+    /** Number of runs in the suite. */
+    get size() {
+        return this.total;
+    }
+    /** (case index, seed index) of an item. */
+    locate(item) {
+        let lo = 0;
+        let hi = this.starts.length - 1;
+        while (lo < hi) {
+            const mid = (lo + hi + 1) >> 1;
+            if (this.starts[mid] <= item)
+                lo = mid;
             else
-                this.child.kill("SIGKILL");
+                hi = mid - 1;
         }
-        catch {
-            this.child.kill("SIGKILL");
-        }
+        return [lo, item - this.starts[lo]];
     }
-    /** Records a fault (the first one wins) and fails a waiting exchange. */
-    setFault(fault) {
-        if (this.fault === null)
-            this.fault = fault;
-        const w = this.waiter;
-        if (w !== null) {
-            this.waiter = null;
-            w.reject(this.fault);
-        }
-    }
-    onData(chunk) {
-        if (this.discarding)
-            return;
-        let start = 0;
-        for (;;) {
-            const nl = chunk.indexOf(10, start);
-            if (nl < 0)
-                break;
-            const piece = chunk.subarray(start, nl);
-            if (this.pendingBytes + piece.length > this.options.maxLineBytes)
-                return this.tooLong(piece);
-            let text;
-            if (this.chunks.length === 0)
-                text = piece.toString("utf8");
+    async runItems(items) {
+        const out = new Array(items.length);
+        const byAdapter = new Map();
+        const local = [];
+        items.forEach((item, j) => {
+            const adapter = this.processAdapterOf(this.suite.cases[this.locate(item)[0]].use);
+            if (adapter === null)
+                local.push(j);
             else {
-                this.chunks.push(piece);
-                text = Buffer.concat(this.chunks).toString("utf8");
-                this.chunks = [];
-            }
-            this.pendingBytes = 0;
-            start = nl + 1;
-            this.lineCount++;
-            this.deliver(text.endsWith("\r") ? text.slice(0, -1) : text);
-        }
-        if (start < chunk.length) {
-            const rest = chunk.subarray(start);
-            if (this.pendingBytes + rest.length > this.options.maxLineBytes)
-                return this.tooLong(rest);
-            // Copy: the stream may reuse its buffer.
-            this.chunks.push(Buffer.from(rest));
-            this.pendingBytes += rest.length;
-        }
-    }
-    tooLong(piece) {
-        const head = Buffer.concat([...this.chunks, piece.subarray(0, QUOTE_CHARS)])
-            .subarray(0, QUOTE_CHARS)
-            .toString("utf8");
-        this.chunks = [];
-        this.discarding = true;
-        this.setFault(new ChildFault(`${this.options.label}: line ${this.lineCount + 1} of its output is longer than maxMessageBytes ` +
-            `(${this.options.maxLineBytes} bytes), starting ${quoteLine(head)}; the process was stopped`));
-        this.kill();
-    }
-    deliver(line) {
-        const w = this.waiter;
-        if (w !== null) {
-            this.waiter = null;
-            w.resolve(line);
-        }
-        else {
-            this.lines.push(line);
-        }
-    }
-    busy() {
-        this.child.ref();
-        for (const s of [this.child.stdin, this.child.stdout, this.child.stderr])
-            s.ref?.();
-    }
-    idle() {
-        this.child.unref();
-        for (const s of [this.child.stdin, this.child.stdout, this.child.stderr])
-            s.unref?.();
-    }
-}
-
-;// CONCATENATED MODULE: ./build/package/adapters/env.js
-/**
- * The environment an optimizer process gets: an allow-list, never the harness's own environment.
- *
- * The optimizer under test is untrusted code (a pull request can change it), while the harness may run
- * with a GitHub token and other secrets in its environment (GITHUB_TOKEN, INPUT_*, ACTIONS_*). So the
- * child receives only the variables named here, copied from the harness when set, plus the literal
- * values the config gives under `adapters.NAME.env`. A deny-list would leak every secret nobody
- * thought of; an allow-list leaks none by construction.
- */
-/**
- * Variables copied from the harness's environment when set: what programs need to find executables,
- * a home directory, the locale, the time zone and a temporary directory (and their Windows spellings).
- */
-const PASSED_VARIABLES = Object.freeze([
-    "PATH",
-    "HOME",
-    "LANG",
-    "LANGUAGE",
-    "LC_ALL",
-    "LC_CTYPE",
-    "LC_NUMERIC",
-    "TZ",
-    "TMPDIR",
-    "TEMP",
-    "TMP",
-    "SYSTEMROOT",
-    "WINDIR",
-    "PATHEXT",
-    "COMSPEC",
-    "USERPROFILE",
-]);
-/**
- * The child's environment: the allow-listed variables from `parent` (when set), then `extra` (literal
- * values from the config) on top. Nothing else.
- */
-function minimalEnvironment(parent, extra = {}) {
-    const env = {};
-    for (const name of PASSED_VARIABLES) {
-        const value = parent[name];
-        if (value !== undefined)
-            env[name] = value;
-    }
-    for (const [name, value] of Object.entries(extra))
-        env[name] = value;
-    return env;
-}
-
-// EXTERNAL MODULE: ./build/package/core/rng.js
-var rng = __nccwpck_require__(2906);
-// EXTERNAL MODULE: ./build/package/runner/recorder.js
-var runner_recorder = __nccwpck_require__(8022);
-;// CONCATENATED MODULE: ./build/package/adapters/process-run.js
-
-
-class ProtocolRun {
-    request;
-    now;
-    problem;
-    dim;
-    /** The last reported iterate x_k. */
-    x;
-    grad;
-    /** Scratch for a requested evaluation point. */
-    point;
-    recorder;
-    status = "running";
-    /** Id of the client-side instance (changes when a resume scenario restarts the run). */
-    clientId = -1;
-    /** Global step at which the current client instance started (its step 1 is step base + 1). */
-    instanceBase = 0;
-    /** Completed steps. */
-    k = 0;
-    evaluations = 0;
-    /** True while x_k is not yet measured (waiting for the next evaluation or the end of the run). */
-    pending = false;
-    /** Evaluations used by the end of step k. */
-    evalsAtK = 0;
-    /** Set when the run waits for its exported state (resume scenario). */
-    awaitingState = false;
-    metrics = null;
-    startedAt;
-    seedHex;
-    every;
-    constructor(request, now) {
-        this.request = request;
-        this.now = now;
-        const { spec, seedIndex, suiteSeed, definition } = request;
-        const runSeed = (0,rng/* deriveRunSeed */.EK)(suiteSeed, spec.problemKey, seedIndex);
-        this.seedHex = (0,rng/* seedToHex */.K$)(runSeed);
-        this.problem = definition.create(spec.params, { noise: (0,rng/* runStream */.G5)(runSeed, rng/* STREAM */.dY.noise) });
-        this.dim = this.problem.dim;
-        this.x = new Float64Array(this.dim);
-        this.grad = new Float64Array(this.dim);
-        this.point = new Float64Array(this.dim);
-        this.problem.start(this.x, (0,rng/* runStream */.G5)(runSeed, rng/* STREAM */.dY.start));
-        this.recorder = new runner_recorder/* RunRecorder */.K(spec, this.problem.fStar);
-        this.every = this.problem.stochastic ? Math.max(1, spec.measureEvery) : 1;
-        this.startedAt = now();
-    }
-    get spec() {
-        return this.request.spec;
-    }
-    /** Measures f(x₀). Returns the metrics if the run must not start (non-finite f₀), else null. */
-    begin() {
-        const first = this.recorder.begin(this.problem.objective(this.x));
-        return first === null ? null : this.end(first, 0);
-    }
-    /** The `start` entry for a client instance with id `clientId` (from x_k, with `state` for a restart). */
-    startEntry(clientId, state) {
-        this.clientId = clientId;
-        this.instanceBase = this.k;
-        const pauseAt = this.request.control?.pauseAt;
-        const pause = pauseAt !== undefined && pauseAt > this.k ? pauseAt - this.k : undefined;
-        return {
-            run: clientId,
-            optimizer: this.request.optimizer,
-            hyper: this.spec.hyper,
-            dim: this.dim,
-            x: Array.from(this.x),
-            ...(state !== undefined ? { state } : {}),
-            ...(pause !== undefined ? { pause } : {}),
-        };
-    }
-    /**
-     * The client completed step k+1 with iterate `x` (already checked for length; null = not finite).
-     * Records it, applies the budgets, and says whether the run goes on.
-     */
-    onStep(x) {
-        if (this.pending && this.measure(this.problem.objective(this.x), this.evalsAtK))
-            return this.status;
-        const k = ++this.k;
-        if (x === null) {
-            this.x.fill(NaN);
-            this.recorder.keepIterate(k, this.x);
-            this.request.control?.afterStep?.(k, this.x);
-            const verdict = this.recorder.record(k, NaN, this.evaluations);
-            return this.stop(verdict ?? "diverged", this.evaluations);
-        }
-        const xs = this.x;
-        for (let i = 0; i < xs.length; i++)
-            xs[i] = x[i];
-        this.recorder.keepIterate(k, xs);
-        this.request.control?.afterStep?.(k, xs);
-        this.evalsAtK = this.evaluations;
-        const { steps: maxSteps, evaluations: maxEvals, seconds } = this.spec.budget;
-        const stochastic = this.problem.stochastic;
-        if (stochastic) {
-            if (k % this.every === 0 || k === maxSteps) {
-                const verdict = this.recorder.record(k, this.problem.objective(xs), this.evaluations);
-                if (verdict !== null)
-                    return this.stop(verdict, this.evaluations);
-            }
-        }
-        else {
-            this.pending = true;
-        }
-        let budget = null;
-        if (maxEvals > 0 && this.evaluations >= maxEvals)
-            budget = "evaluations";
-        else if (this.now() - this.startedAt > seconds * 1000)
-            budget = "time";
-        else if (k >= maxSteps)
-            budget = "steps";
-        if (budget !== null) {
-            let verdict = null;
-            if (this.pending) {
-                this.pending = false;
-                verdict = this.recorder.record(k, this.problem.objective(xs), this.evaluations);
-            }
-            else if (stochastic && k % this.every !== 0 && k !== maxSteps) {
-                verdict = this.recorder.record(k, this.problem.objective(xs), this.evaluations);
-            }
-            return this.stop(verdict ?? budget, this.evaluations);
-        }
-        if (this.request.control?.pauseAt === k)
-            this.status = "paused";
-        return this.status;
-    }
-    /**
-     * The client asks for the loss and gradient at `x` (length already checked; null = not finite;
-     * "iterate" = at x_k, from a step entry's `eval: true`). Returns the answer (a values entry as JSON
-     * text), or null when the run
-     * ended instead (target reached or divergence found while measuring x_k).
-     */
-    onEval(x) {
-        let atIterate = x === "iterate";
-        if (x !== "iterate" && x !== null && this.pending)
-            atIterate = sameBits(x, this.x);
-        if (this.pending) {
-            this.pending = false;
-            if (atIterate) {
-                const f = this.problem.evaluate(this.x, this.grad);
-                this.evaluations++;
-                const verdict = this.recorder.record(this.k, f, this.evalsAtK);
-                if (verdict !== null) {
-                    this.stop(verdict, this.evalsAtK);
-                    return null;
-                }
-                return this.values(f);
-            }
-            const verdict = this.recorder.record(this.k, this.problem.objective(this.x), this.evalsAtK);
-            if (verdict !== null) {
-                this.stop(verdict, this.evalsAtK);
-                return null;
-            }
-        }
-        if (x === null) {
-            // A point that is no longer finite: the run has diverged during step k+1.
-            this.evaluations++;
-            const verdict = this.recorder.record(this.k + 1, NaN, this.evaluations);
-            this.stop(verdict ?? "diverged", this.evaluations);
-            return null;
-        }
-        let f;
-        if (atIterate) {
-            f = this.problem.evaluate(this.x, this.grad);
-        }
-        else {
-            const p = this.point;
-            const xs = x;
-            for (let i = 0; i < p.length; i++)
-                p[i] = xs[i];
-            f = this.problem.evaluate(p, this.grad);
-        }
-        this.evaluations++;
-        return this.values(f);
-    }
-    /** The client's optimizer code failed: the run ends with an error naming the phase and the step. */
-    onFailed(phase, message) {
-        const next = this.k + 1;
-        const text = phase === "create"
-            ? `creating the optimizer failed: ${message}`
-            : phase === "step"
-                ? `step ${next} threw: ${message}`
-                : phase === "exportState"
-                    ? `exportState after step ${this.k} failed: ${message}`
-                    : `${phase} before step ${next} failed: ${message}`;
-        this.fail(text);
-    }
-    /** Ends the run with stop "error" and `reason` (no further measurement). */
-    fail(reason) {
-        return this.end("error", this.evaluations, reason);
-    }
-    /** The values entry as JSON text (non-finite numbers as null), built directly: the hot path. */
-    values(f) {
-        const g = this.grad;
-        let text = `{"run":${this.clientId},"f":${jsonNumber(f)},"g":[`;
-        for (let i = 0; i < g.length; i++)
-            text += i === 0 ? jsonNumber(g[i]) : `,${jsonNumber(g[i])}`;
-        return text + "]}";
-    }
-    /** Records f(x_k) for a pending measurement; true if the run ended. */
-    measure(f, evaluations) {
-        this.pending = false;
-        const verdict = this.recorder.record(this.k, f, evaluations);
-        if (verdict === null)
-            return false;
-        this.stop(verdict, evaluations);
-        return true;
-    }
-    stop(reason, evaluations) {
-        this.end(reason, evaluations);
-        return this.status;
-    }
-    end(stop, evaluations, error) {
-        if (this.metrics === null) {
-            this.metrics = this.recorder.finish({ seed: this.request.seedIndex, runSeed: this.seedHex, stop, evaluations, error });
-        }
-        this.status = "ended";
-        return this.metrics;
-    }
-}
-/** A number as JSON writes it (the same digits as JSON.stringify), null for NaN and ±Infinity. */
-function jsonNumber(x) {
-    return Number.isFinite(x) ? String(x) : "null";
-}
-/** Bitwise equality of a requested point and the iterate (so -0 ≠ 0 and NaN never matches). */
-function sameBits(a, b) {
-    for (let i = 0; i < b.length; i++)
-        if (!Object.is(a[i], b[i]))
-            return false;
-    return true;
-}
-
-;// CONCATENATED MODULE: ./build/package/adapters/protocol.js
-/**
- * The subprocess protocol, version 1: the messages the harness and an optimizer process exchange as
- * JSON lines over the process's stdin (harness → client) and stdout (client → harness). The JSON
- * Schemas of these messages are in ./protocol-schema.ts and ship as files in schema/protocol/; the
- * design is recorded in docs/adapters.md ("The subprocess protocol").
- *
- * Shape of a session:
- *   harness: hello            client: ready      (version and the optimizers it serves, with capabilities)
- *   harness: orders           client: report     (repeated; exactly one report answers each orders)
- *   harness: bye              client exits
- *
- * One `orders` message carries work for many runs at once (start, evaluation values, resume, state
- * export, end); its `report` answers for exactly those runs (step boundaries with iterates, evaluation
- * requests, exported states, failures) and no others. A run the orders do not name waits. The client
- * answers orders one by one, in the order received; the harness may send a second orders (for other
- * runs) before the first report arrives, so both sides compute at the same time. The harness owns the
- * problems: the client never sees a problem, only points it asked about and the loss and gradient there.
- *
- * A run's life in the client: `start` → evaluation requests and step reports, each step ending with
- * the new iterate; after a step reported without an evaluation request for the next step (a step that
- * needed none, or the pause point) the run waits until an orders `resume`s it.
- *
- * Numbers: every number is a JSON number. JSON has no NaN or Infinity, so non-finite values are
- * spelled `null` where the protocol allows it: a non-finite loss or gradient entry the harness
- * computed, or a client iterate or evaluation point that is no longer finite (the run has diverged).
- * A bare NaN or Infinity token is not JSON and is a protocol fault.
- */
-/** The protocol versions this harness speaks, newest last. */
-const PROTOCOL_VERSIONS = [1];
-/** Optional optimizer capabilities a client declares in its handshake. */
-const CAPABILITIES = ["state", "lr"];
-/** Where in a run a client-side failure happened. */
-const FAILURE_PHASES = ["create", "step", "exportState", "importState", "setLearningRate"];
-
-;// CONCATENATED MODULE: ./build/package/adapters/protocol-schema.js
-/**
- * JSON Schemas (draft 2020-12) of every message of the subprocess protocol, version 1 (see
- * ./protocol.ts for the meaning of each field). The harness validates what a client sends against
- * `readySchema` and `reportSchema` with ajv; client authors validate what they receive against the
- * harness messages. scripts/protocol-schemas.ts writes these objects to schema/protocol/ and
- * tests/adapters/protocol-schema.test.ts fails when a shipped file differs from the object here.
- *
- * What a schema cannot say is checked by the harness in code: vector lengths (the run's dimension),
- * run ids that exist, and the order of a run's entries.
- */
-
-const BASE = "https://gradgate.dev/schema/protocol/v1";
-const DRAFT = "https://json-schema.org/draft/2020-12/schema";
-const runId = { type: "integer", minimum: 0, maximum: 9007199254740991, description: "Run id." };
-const runIds = { type: "array", items: runId };
-const count = { type: "integer", minimum: 1, maximum: 9007199254740991 };
-const finiteVector = { type: "array", items: { type: "number" } };
-const vectorOrNull = {
-    type: ["array", "null"],
-    items: { type: "number" },
-    description: "A point; null when it is not finite (NaN or ±Infinity cannot be written in JSON).",
-};
-const hyperValues = {
-    type: "object",
-    additionalProperties: { type: ["number", "boolean", "string"] },
-};
-const state = {
-    type: "object",
-    description: "An optimizer's exported state: named numbers and arrays of numbers.",
-    additionalProperties: {
-        anyOf: [{ type: "number" }, { type: "array", items: { type: "number" } }],
-    },
-};
-const helloSchema = {
-    $schema: DRAFT,
-    $id: `${BASE}/hello.schema.json`,
-    title: "gradgate protocol: hello (harness → client, first message)",
-    type: "object",
-    additionalProperties: false,
-    required: ["type", "protocols", "harness"],
-    properties: {
-        type: { const: "hello" },
-        protocols: {
-            type: "array",
-            minItems: 1,
-            items: { type: "integer", minimum: 1 },
-            description: "Protocol versions the harness speaks; the client answers with one of them.",
-        },
-        harness: { type: "string", description: "Name and version of the harness (informative)." },
-    },
-};
-const readySchema = {
-    $schema: DRAFT,
-    $id: `${BASE}/ready.schema.json`,
-    title: "gradgate protocol: ready (client → harness, answer to hello)",
-    type: "object",
-    additionalProperties: false,
-    required: ["type", "protocol", "optimizers"],
-    properties: {
-        type: { const: "ready" },
-        protocol: { type: "integer", minimum: 1, description: "The version chosen from hello.protocols." },
-        client: { type: "string", maxLength: 200, description: "Name and version of the client (informative)." },
-        optimizers: {
-            type: "array",
-            minItems: 1,
-            description: "The optimizers this process serves.",
-            items: {
-                type: "object",
-                additionalProperties: false,
-                required: ["name", "capabilities"],
-                properties: {
-                    name: { type: "string", pattern: "^[A-Za-z0-9][A-Za-z0-9_.-]*$", maxLength: 100 },
-                    title: { type: "string", maxLength: 300 },
-                    defaults: { ...hyperValues, description: "Default hyperparameters; the config's values override them." },
-                    capabilities: {
-                        type: "array",
-                        uniqueItems: true,
-                        items: { type: "string", enum: [...CAPABILITIES] },
-                        description: '"state": exportState/importState (resume); "lr": setLearningRate between steps.',
-                    },
-                },
-            },
-        },
-    },
-};
-const ordersSchema = {
-    $schema: DRAFT,
-    $id: `${BASE}/orders.schema.json`,
-    title: "gradgate protocol: orders (harness → client; answered by exactly one report, in order)",
-    type: "object",
-    additionalProperties: false,
-    required: ["type"],
-    properties: {
-        type: { const: "orders" },
-        start: {
-            type: "array",
-            description: "New runs: create an instance, then begin stepping from x.",
-            items: {
-                type: "object",
-                additionalProperties: false,
-                required: ["run", "optimizer", "hyper", "dim", "x"],
-                properties: {
-                    run: runId,
-                    optimizer: { type: "string" },
-                    hyper: { ...hyperValues, description: "Hyperparameters with the optimizer's defaults merged in." },
-                    dim: count,
-                    x: { ...finiteVector, description: "Start point, length dim." },
-                    state: { ...state, description: "Import this state before the first step." },
-                    pause: { ...count, description: "After completing this step (counted from 1 for this instance), wait for resume." },
-                },
-            },
-        },
-        values: {
-            type: "array",
-            description: "Loss and gradient at the point each run asked about; null = not finite.",
-            items: {
-                type: "object",
-                additionalProperties: false,
-                required: ["run", "f", "g"],
-                properties: {
-                    run: runId,
-                    f: { type: ["number", "null"] },
-                    g: { type: "array", items: { type: ["number", "null"] } },
-                },
-            },
-        },
-        resume: {
-            type: "array",
-            description: "Waiting runs to continue: at their pause point, or after a step reported without an evaluation request.",
-            items: {
-                type: "object",
-                additionalProperties: false,
-                required: ["run"],
-                properties: {
-                    run: runId,
-                    lr: { type: "number", exclusiveMinimum: 0, description: "Call setLearningRate(lr) before the next step." },
-                    pause: { ...count, description: "New pause point: after this step (counted from 1 for this instance)." },
-                },
-            },
-        },
-        exportState: { ...runIds, description: "Paused runs whose state the report must carry in states." },
-        end: { ...runIds, description: "Runs that are over: forget them." },
-    },
-};
-const byeSchema = {
-    $schema: DRAFT,
-    $id: `${BASE}/bye.schema.json`,
-    title: "gradgate protocol: bye (harness → client, last message; the client exits with status 0)",
-    type: "object",
-    additionalProperties: false,
-    required: ["type"],
-    properties: { type: { const: "bye" } },
-};
-const reportSchema = {
-    $schema: DRAFT,
-    $id: `${BASE}/report.schema.json`,
-    title: "gradgate protocol: report (client → harness; answers one orders, for exactly the runs it names)",
-    type: "object",
-    additionalProperties: false,
-    required: ["type"],
-    properties: {
-        type: { const: "report" },
-        steps: {
-            type: "array",
-            description: "Completed steps (at most one per run per report, before that run's evaluation request).",
-            items: {
-                type: "object",
-                additionalProperties: false,
-                required: ["run", "x"],
-                properties: {
-                    run: runId,
-                    x: { ...vectorOrNull, description: "The new iterate, length dim; null when it is not finite." },
-                    eval: { type: "boolean", description: "true: the next step's first evaluation is at this iterate." },
-                },
-            },
-        },
-        evals: {
-            type: "array",
-            description: "Evaluation requests (at most one outstanding per run).",
-            items: {
-                type: "object",
-                additionalProperties: false,
-                required: ["run", "x"],
-                properties: { run: runId, x: vectorOrNull },
-            },
-        },
-        states: {
-            type: "array",
-            description: "States asked for by orders.exportState.",
-            items: {
-                type: "object",
-                additionalProperties: false,
-                required: ["run", "state"],
-                properties: { run: runId, state },
-            },
-        },
-        failed: {
-            type: "array",
-            description: "Runs whose optimizer code raised an error; each ends with stop \"error\".",
-            items: {
-                type: "object",
-                additionalProperties: false,
-                required: ["run", "phase", "message"],
-                properties: {
-                    run: runId,
-                    phase: { type: "string", enum: [...FAILURE_PHASES] },
-                    message: { type: "string" },
-                },
-            },
-        },
-    },
-};
-/** Every protocol schema with the file it ships as (paths relative to the repository root). */
-const PROTOCOL_SCHEMAS = [
-    { file: "schema/protocol/hello.schema.json", schema: helloSchema },
-    { file: "schema/protocol/ready.schema.json", schema: readySchema },
-    { file: "schema/protocol/orders.schema.json", schema: ordersSchema },
-    { file: "schema/protocol/report.schema.json", schema: reportSchema },
-    { file: "schema/protocol/bye.schema.json", schema: byeSchema },
-];
-
-;// CONCATENATED MODULE: ./build/package/adapters/session.js
-/**
- * A process adapter session: one optimizer process (restarted when it dies) serving many runs at once.
- *
- * Each turn the harness sends one `orders` message — new runs to start, the loss and gradient for every
- * evaluation asked for in the last report, paused runs to resume, states to export, runs that are over
- * — and reads one `report` with the next evaluation requests and step boundaries of all its runs. Up to
- * `maxRuns` runs are in flight; a finished run's slot goes to the next queued run in the next turn, so
- * the traffic (and everything else) depends only on the requests, never on timing.
- *
- * Containment. Faults of one run end that run only, with a reason naming the report, the field, the
- * run and the bad value: a vector of the wrong length, NaN or Infinity in a point, a failure raised by
- * the optimizer code, an entry out of order. Faults of the process end every run in flight, with the
- * reason and the tail of the process's stderr: a crash, no report within the message time-out, a line
- * that is not JSON (anything a program prints to stdout by mistake), a message that is not a protocol
- * report, a line over `maxMessageBytes`. The process is then stopped and a fresh one serves the runs
- * still queued. Nothing a client does makes `run` throw. A run still going after the run time-out
- * ends with an error at the next report.
- */
-
-
-
-
-
-
-
-
-let validators = null;
-function getValidators() {
-    if (validators === null) {
-        const ajv = new _2020.Ajv2020({ allErrors: true, strict: true, allowUnionTypes: true });
-        validators = { ready: ajv.compile(readySchema), report: ajv.compile(reportSchema) };
-    }
-    return validators;
-}
-/** Marker that replaces a bare NaN/Infinity token so the rest of a line can still be read. */
-const NON_FINITE = "\u0000non-finite:";
-const SECTIONS = ["steps", "evals", "states", "failed"];
-class ProcessSession {
-    settings;
-    options;
-    link = null;
-    readyMessage = null;
-    nextClientId = 0;
-    reports = 0;
-    queue = Promise.resolve();
-    now;
-    /** Runs ended in the last report of the previous `run` call, named in the next orders' `end`. */
-    ends = [];
-    label;
-    constructor(settings, options = {}) {
-        this.settings = settings;
-        this.options = options;
-        this.now = options.now ?? (() => performance.now());
-        this.label = `adapter ${JSON.stringify(settings.name)}`;
-    }
-    /** The handshake: starts the process if needed and returns what it serves. Throws a `ChildFault`. */
-    describe() {
-        return this.exclusive(() => this.ensureStarted());
-    }
-    /** Runs every request; resolves with their metrics in request order. Never rejects for client faults. */
-    run(requests) {
-        return this.exclusive(() => this.runAll(requests));
-    }
-    /** Says bye and waits for the process to exit (killing it after a grace period). */
-    close() {
-        return this.exclusive(async () => {
-            const link = this.link;
-            this.link = null;
-            if (link !== null) {
-                const bye = JSON.stringify({ type: "bye" });
-                if (link.alive)
-                    this.options.onLine?.("out", bye);
-                await link.close(bye);
+                let positions = byAdapter.get(adapter);
+                if (positions === undefined)
+                    byAdapter.set(adapter, (positions = []));
+                positions.push(j);
             }
         });
-    }
-    /** Process id of the current child (tests). */
-    get pid() {
-        return this.link?.pid;
-    }
-    /** The tail of the current (or last) child's stderr. */
-    stderrTail() {
-        return this.link?.stderrTail() ?? "";
-    }
-    exclusive(task) {
-        const result = this.queue.then(task, task);
-        this.queue = result.catch(() => { });
-        return result;
-    }
-    async ensureStarted() {
-        if (this.link !== null && this.link.alive && this.readyMessage !== null)
-            return this.readyMessage;
-        if (this.link !== null)
-            this.link.kill();
-        const s = this.settings;
-        if (!(0,external_node_fs_.existsSync)(s.cwd)) {
-            throw new ChildFault(`${this.label}: the working directory ${quoteLine(s.cwd)} does not exist (adapters.${s.name}.cwd)`);
-        }
-        const link = new ChildLink({
-            command: s.command,
-            cwd: s.cwd,
-            env: minimalEnvironment(this.options.parentEnv ?? process.env, s.env),
-            maxLineBytes: s.maxMessageBytes,
-            label: this.label,
-        });
-        this.link = link;
-        this.readyMessage = null;
-        this.ends = [];
-        this.reports = 0;
-        const hello = { type: "hello", protocols: [...PROTOCOL_VERSIONS], harness: `${version/* TOOL_NAME */.l} ${version/* TOOL_VERSION */.w}` };
-        let line;
-        try {
-            line = await this.exchange(link, JSON.stringify(hello), s.timeouts.start, "ready message (handshake)");
-        }
-        catch (err) {
-            throw this.withStderr(err, link);
-        }
-        const fail = (why) => {
-            link.kill();
-            return this.withStderr(new ChildFault(`${this.label}: handshake failed: ${why}`), link);
-        };
-        let message;
-        try {
-            message = JSON.parse(line);
-        }
-        catch {
-            throw fail(`the first line is not JSON: ${quoteLine(line)}`);
-        }
-        const { ready } = getValidators();
-        if (!ready(message))
-            throw fail(`the first line is not a ready message (${ajvText(ready.errors)}): ${quoteLine(line)}`);
-        const msg = message;
-        if (!PROTOCOL_VERSIONS.includes(msg.protocol)) {
-            throw fail(`protocol ${msg.protocol} is not spoken here (harness speaks ${PROTOCOL_VERSIONS.join(", ")})`);
-        }
-        const names = new Set();
-        for (const o of msg.optimizers) {
-            if (names.has(o.name))
-                throw fail(`optimizer ${JSON.stringify(o.name)} is listed twice`);
-            names.add(o.name);
-        }
-        this.readyMessage = msg;
-        return msg;
-    }
-    async exchange(link, out, seconds, waitingFor) {
-        const tap = this.options.onLine;
-        if (tap === undefined)
-            return link.exchange(out, seconds, waitingFor);
-        tap("out", out);
-        const line = await link.exchange(out, seconds, waitingFor);
-        tap("in", line);
-        return line;
-    }
-    withStderr(fault, link = this.link) {
-        const tail = link?.stderrTail() ?? "";
-        return tail === "" ? fault : new ChildFault(`${fault.reason}\nstderr (last lines):\n${tail}`);
-    }
-    async runAll(requests) {
-        const results = new Array(requests.length);
-        const index = new Map();
-        const settle = (run) => {
-            results[index.get(run)] = run.metrics;
-        };
-        // Two lanes when there is room: the client works on one lane's orders while the harness works on
-        // the other's report. Each lane is strictly request/reply; the client answers orders in the order
-        // received, so the sequence of messages (and every decision) does not depend on timing.
-        const max = this.settings.maxRuns;
-        const lanes = (max >= 2 ? [Math.ceil(max / 2), Math.floor(max / 2)] : [max]).map((capacity) => ({
-            capacity,
-            active: new Map(),
-            turn: new Turn([]),
+        await Promise.all([...byAdapter].map(async ([adapter, positions]) => {
+            const metrics = await this.runProcessItems(adapter, positions.map((j) => items[j]));
+            positions.forEach((j, i) => (out[j] = metrics[i]));
         }));
-        lanes[0].turn.end.push(...this.ends);
-        this.ends = [];
-        let next = 0;
-        const inFlight = () => lanes.reduce((n, lane) => n + lane.active.size, 0);
-        const fill = (lane) => {
-            while (lane.active.size < lane.capacity && next < requests.length) {
-                const run = new ProtocolRun(requests[next], this.now);
-                index.set(run, next++);
-                if (run.begin() !== null) {
-                    settle(run);
-                    continue;
-                }
-                const id = this.nextClientId++;
-                lane.turn.start.push(run.startEntry(id));
-                lane.turn.served.add(id);
-                lane.active.set(id, run);
-            }
-        };
-        while (next < requests.length || inFlight() > 0) {
-            if (inFlight() === 0 && (this.link === null || !this.link.alive || this.readyMessage === null)) {
-                try {
-                    await this.ensureStarted();
-                }
-                catch (err) {
-                    const reason = err instanceof ChildFault ? err.reason : String(err);
-                    for (; next < requests.length; next++) {
-                        const run = new ProtocolRun(requests[next], this.now);
-                        index.set(run, next);
-                        if (run.begin() === null)
-                            run.fail(reason);
-                        settle(run);
-                    }
-                    break;
-                }
-                for (const lane of lanes)
-                    lane.turn = new Turn([]);
-            }
-            const link = this.link;
-            const waiting = [];
-            const send = (lane) => {
-                fill(lane);
-                if (lane.active.size === 0)
-                    return;
-                const text = lane.turn.message(lane.active);
-                this.options.onLine?.("out", text);
-                link.send(text);
-                waiting.push(lane);
+        for (const j of local)
+            out[j] = await this.runLocalItem(items[j]);
+        return out;
+    }
+    async runItem(item) {
+        return (await this.runItems([item]))[0];
+    }
+    /** Ends the optimizer processes this batch started. */
+    async close() {
+        const sessions = [...this.sessions.values()];
+        this.sessions.clear();
+        await Promise.all(sessions.map((s) => s.close()));
+    }
+    async runLocalItem(item) {
+        const [ci, si] = this.locate(item);
+        const spec = this.suite.cases[ci];
+        let loaded = this.optimizers.get(spec.use);
+        if (loaded === undefined) {
+            loaded = (0,_resolve_js__WEBPACK_IMPORTED_MODULE_3__/* .loadOptimizer */ .uk)(spec.use, `case ${spec.id}`, this.suite.adapters);
+            this.optimizers.set(spec.use, loaded);
+        }
+        const { factory, untrusted } = await loaded;
+        const def = this.problem(spec.problem);
+        const run = spec.scenario?.resume || spec.scenario?.lrChange ? _scenarios_js__WEBPACK_IMPORTED_MODULE_4__/* .executeScenarioRun */ .rC : _execute_js__WEBPACK_IMPORTED_MODULE_2__/* .executeRun */ .l;
+        const { metrics, scratch } = run(spec, si, this.suite.seed, factory, def, {
+            verifyIterate: untrusted,
+            scratch: this.scratch,
+        });
+        this.scratch = scratch;
+        return metrics;
+    }
+    /** The process adapter serving `use` ("NAME:optimizer" with NAME declared), or null. */
+    processAdapterOf(use) {
+        const i = use.indexOf(":");
+        const name = i < 0 ? "" : use.slice(0, i);
+        return this.suite.adapters?.processes[name] !== undefined ? name : null;
+    }
+    problem(name) {
+        let def = this.problems.get(name);
+        if (def === undefined) {
+            def = (0,_problems_index_js__WEBPACK_IMPORTED_MODULE_0__/* .getProblem */ .Ai)(name);
+            this.problems.set(name, def);
+        }
+        return def;
+    }
+    /** Runs items of one process adapter together; resume scenarios add an uninterrupted twin per run. */
+    async runProcessItems(adapter, items) {
+        let session = this.sessions.get(adapter);
+        if (session === undefined) {
+            session = new _adapters_session_js__WEBPACK_IMPORTED_MODULE_1__/* .ProcessSession */ .M(this.suite.adapters.processes[adapter]);
+            this.sessions.set(adapter, session);
+        }
+        const requests = [];
+        const plan = [];
+        for (const item of items) {
+            const [ci, si] = this.locate(item);
+            const spec = this.suite.cases[ci];
+            const base = {
+                spec,
+                seedIndex: si,
+                suiteSeed: this.suite.seed,
+                definition: this.problem(spec.problem),
+                optimizer: spec.use.slice(adapter.length + 1),
             };
-            lanes.forEach(send);
-            let fault = null;
-            while (waiting.length > 0) {
-                const lane = waiting.shift();
-                let line;
-                try {
-                    line = await link.next(this.settings.timeouts.message, "report");
-                }
-                catch (err) {
-                    fault = this.withStderr(err, link).reason;
-                    break;
-                }
-                this.options.onLine?.("in", line);
-                this.reports++;
-                const following = new Turn([]);
-                const processFault = this.processReport(line, lane.turn, following, lane.active, settle);
-                if (processFault !== null) {
-                    link.kill();
-                    fault = this.withStderr(new ChildFault(processFault), link).reason;
-                    break;
-                }
-                lane.turn = following;
-                send(lane);
+            const sc = spec.scenario;
+            if (sc?.resume) {
+                const plain = new _scenarios_js__WEBPACK_IMPORTED_MODULE_4__/* .TrajectoryHashes */ .k$(spec.budget.steps);
+                const resumed = new _scenarios_js__WEBPACK_IMPORTED_MODULE_4__/* .TrajectoryHashes */ .k$(spec.budget.steps);
+                requests.push({ ...base, control: { afterStep: plain.record } });
+                const control = {
+                    pauseAt: sc.resume.at,
+                    action: { kind: "restart" },
+                    afterStep: resumed.record,
+                };
+                plan.push({ at: requests.length, twin: { plain, resumed } });
+                requests.push({ ...base, control });
             }
-            if (fault !== null) {
-                for (const lane of lanes) {
-                    this.faultAll(lane.active, fault, settle);
-                    lane.turn = new Turn([]);
-                }
+            else {
+                const control = sc?.lrChange
+                    ? { pauseAt: sc.lrChange.at, action: { kind: "lr", lr: sc.lrChange.lr } }
+                    : undefined;
+                plan.push({ at: requests.length });
+                requests.push(control ? { ...base, control } : base);
             }
         }
-        // Runs ended in the last reports are still known to the client: name them in the next orders.
-        for (const lane of lanes)
-            this.ends.push(...lane.turn.end);
-        return results;
-    }
-    faultAll(active, reason, settle) {
-        for (const run of active.values()) {
-            run.fail(reason);
-            settle(run);
-        }
-        active.clear();
-    }
-    /**
-     * Applies one report to the runs and assembles the next orders in `next`. Run-level faults end single
-     * runs; returns the reason of a fault that concerns the whole process (the caller then stops it).
-     */
-    processReport(line, turn, next, active, settle) {
-        const where = `${this.label}: report ${this.reports}`;
-        let data;
-        try {
-            data = JSON.parse(line);
-        }
-        catch {
-            data = parseWithNonFinite(line);
-            if (data === undefined) {
-                return `${where} is not JSON (stdout must carry protocol messages only; write diagnostics to stderr): ${quoteLine(line)}`;
-            }
-        }
-        if (data === null || typeof data !== "object" || Array.isArray(data) || data.type !== "report") {
-            return `${where} is not a protocol report (expected a JSON object with "type": "report"): ${quoteLine(line)}`;
-        }
-        const report = data;
-        const endRun = (id, reason) => {
-            const run = active.get(id);
-            if (run !== undefined && run.status !== "ended")
-                run.fail(reason);
-        };
-        const isOver = (id) => active.get(id).status === "ended";
-        // Schema check; an error inside one entry ends that entry's run only.
-        const { report: validate } = getValidators();
-        if (!validate(report)) {
-            const bad = new Map();
-            for (const e of validate.errors ?? []) {
-                const m = /^\/(steps|evals|states|failed)\/(\d+)(.*)$/.exec(e.instancePath);
-                const section = m?.[1];
-                const list = section !== undefined ? report[section] : undefined;
-                const entry = Array.isArray(list) && m ? list[Number(m[2])] : undefined;
-                const id = entry?.run;
-                if (m === null || section === undefined || typeof id !== "number" || !active.has(id)) {
-                    return `${where} is not a valid report: ${e.instancePath || "the message"} ${e.message}: ${quoteLine(line)}`;
-                }
-                const path = `${section}[${m[2]}]${jsonPointerToPath(m[3])}`;
-                const value = valueAt(entry, m[3]);
-                const detail = typeof value === "string" && value.startsWith(NON_FINITE)
-                    ? `is ${value.slice(NON_FINITE.length)}, which JSON cannot carry (send null for a point that is not finite)`
-                    : `${e.message}, got ${quoteLine(JSON.stringify(value) ?? "nothing")}`;
-                endRun(id, `${where}: ${path} of run ${id} ${detail}`);
-                let set = bad.get(section);
-                if (set === undefined)
-                    bad.set(section, (set = new Set()));
-                set.add(Number(m[2]));
-            }
-            for (const [section, indices] of bad) {
-                const kept = report[section].filter((_, i) => !indices.has(i));
-                report[section] = kept;
-            }
-        }
-        const msg = report;
-        // Every id must be a run in flight; anything else is a client bug that confuses all runs.
-        for (const section of SECTIONS) {
-            for (const entry of (msg[section] ?? [])) {
-                if (!active.has(entry.run)) {
-                    return `${where}: ${section} names run ${entry.run}, which is not in flight: ${quoteLine(line)}`;
-                }
-            }
-        }
-        const addressed = new Set();
-        const stepped = new Set();
-        const evaluated = new Set();
-        (msg.steps ?? []).forEach((entry, i) => {
-            const id = entry.run;
-            addressed.add(id);
-            if (isOver(id))
-                return;
-            const run = active.get(id);
-            if (stepped.has(id))
-                return endRun(id, `${where}: steps[${i}] is a second step of run ${id} in one report`);
-            stepped.add(id);
-            if (!turn.served.has(id)) {
-                return endRun(id, `${where}: steps[${i}] reports a step of run ${id}, which is paused after step ${run.k}`);
-            }
-            if (entry.x !== null && entry.x.length !== run.dim) {
-                return endRun(id, `${where}: steps[${i}].x of run ${id} has ${entry.x.length} numbers, expected ${run.dim}`);
-            }
-            const status = run.onStep(entry.x);
-            if (entry.eval === true && status !== "ended") {
-                if (status === "paused") {
-                    return endRun(id, `${where}: steps[${i}] of run ${id} asks for an evaluation after pausing at step ${run.k}`);
-                }
-                evaluated.add(id);
-                const values = run.onEval("iterate");
-                if (values !== null)
-                    next.answer(id, values);
-            }
+        const metrics = await session.run(requests);
+        return plan.map(({ at, twin }) => {
+            const m = metrics[at];
+            return twin ? { ...m, resume: (0,_scenarios_js__WEBPACK_IMPORTED_MODULE_4__/* .resumeVerdict */ .HC)(twin.plain, twin.resumed, m) } : m;
         });
-        (msg.evals ?? []).forEach((entry, i) => {
-            const id = entry.run;
-            addressed.add(id);
-            if (isOver(id))
-                return;
-            const run = active.get(id);
-            if (evaluated.has(id))
-                return endRun(id, `${where}: evals[${i}] is a second evaluation request of run ${id} in one report`);
-            evaluated.add(id);
-            if (run.status === "paused" || !turn.served.has(id)) {
-                return endRun(id, `${where}: evals[${i}] asks for an evaluation for run ${id}, which is paused after step ${run.k}`);
-            }
-            if (entry.x !== null && entry.x.length !== run.dim) {
-                return endRun(id, `${where}: evals[${i}].x of run ${id} has ${entry.x.length} numbers, expected ${run.dim}`);
-            }
-            const values = run.onEval(entry.x);
-            if (values !== null)
-                next.answer(id, values);
-        });
-        (msg.failed ?? []).forEach((entry) => {
-            addressed.add(entry.run);
-            if (!isOver(entry.run))
-                active.get(entry.run).onFailed(entry.phase, truncate(entry.message, 500));
-        });
-        (msg.states ?? []).forEach((entry, i) => {
-            const id = entry.run;
-            addressed.add(id);
-            if (isOver(id))
-                return;
-            const run = active.get(id);
-            if (!run.awaitingState)
-                return endRun(id, `${where}: states[${i}] carries a state of run ${id}, which was not asked for`);
-            run.awaitingState = false;
-            run.status = "running";
-            // The run goes on in a fresh instance that imports the state (resume scenario).
-            next.end.push(id);
-            active.delete(id);
-            const fresh = this.nextClientId++;
-            next.start.push(run.startEntry(fresh, entry.state));
-            next.served.add(fresh);
-            active.set(fresh, run);
-        });
-        // Runs that were given something must answer; paused runs must send the state asked for.
-        for (const id of turn.served) {
-            if (active.has(id) && !addressed.has(id) && !isOver(id)) {
-                endRun(id, `${where} says nothing about run ${id} (expected a step, an evaluation request or a failure)`);
-            }
-        }
-        for (const id of turn.exportState) {
-            const run = active.get(id);
-            if (run !== undefined && run.awaitingState && run.status !== "ended") {
-                endRun(id, `${where} does not carry the state of run ${id}, asked for after step ${run.k}`);
-            }
-        }
-        const now = this.now();
-        const limit = this.settings.timeouts.run;
-        for (const [id, run] of active) {
-            if (run.status !== "ended" && now - run.startedAt > limit * 1000) {
-                endRun(id, `${this.label}: run time-out: run ${id} still going after ${limit} s (timeouts.run), at step ${run.k}`);
-            }
-            if (run.status === "ended") {
-                active.delete(id);
-                next.end.push(id);
-                settle(run);
-            }
-            else if (run.status === "paused") {
-                if (stepped.has(id))
-                    this.atPause(run, id, next);
-            }
-            else if (!evaluated.has(id) && stepped.has(id)) {
-                // A step without an evaluation request: the run waits until the next orders resume it.
-                next.resume.push({ run: id });
-                next.served.add(id);
-            }
-        }
-        return null;
-    }
-    /** A run reached its pause point: put the scenario's action in the next orders. */
-    atPause(run, id, next) {
-        const action = run.request.control?.action;
-        if (action?.kind === "restart") {
-            run.awaitingState = true;
-            next.exportState.push(id);
-            return;
-        }
-        run.status = "running";
-        next.resume.push(action?.kind === "lr" ? { run: id, lr: action.lr } : { run: id });
-        next.served.add(id);
-    }
-}
-/** One orders message being assembled, and the client runs it serves. */
-class Turn {
-    end;
-    start = [];
-    /** Values entries as JSON text (built without intermediate objects: the hot path). */
-    values = [];
-    resume = [];
-    exportState = [];
-    /** Client run ids that must be answered in the report to this turn. */
-    served = new Set();
-    constructor(end) {
-        this.end = end;
-    }
-    answer(run, text) {
-        this.values.push({ run, text });
-        this.served.add(run);
-    }
-    /** The message as one JSON line; entries of runs that ended meanwhile are left out. */
-    message(active) {
-        const live = (id) => {
-            const status = active.get(id)?.status;
-            return status === "running" || status === "paused";
-        };
-        // Joined once at the end: one flat string, cheaper to write than a long chain of concatenations.
-        const parts = ['{"type":"orders"'];
-        if (this.end.length > 0)
-            parts.push(`,"end":${JSON.stringify(this.end)}`);
-        if (this.start.length > 0)
-            parts.push(`,"start":${JSON.stringify(this.start)}`);
-        let first = true;
-        for (const v of this.values) {
-            if (!live(v.run))
-                continue;
-            parts.push(first ? ',"values":[' : ",", v.text);
-            first = false;
-        }
-        if (!first)
-            parts.push("]");
-        const resume = this.resume.filter((r) => live(r.run));
-        if (resume.length > 0)
-            parts.push(`,"resume":${JSON.stringify(resume)}`);
-        const exportState = this.exportState.filter(live);
-        if (exportState.length > 0)
-            parts.push(`,"exportState":${JSON.stringify(exportState)}`);
-        parts.push("}");
-        return parts.join("");
-    }
-}
-function truncate(text, max) {
-    return text.length > max ? text.slice(0, max - 3) + "..." : text;
-}
-function ajvText(errors) {
-    const e = errors?.[0];
-    return e === undefined ? "invalid" : `${e.instancePath || "the message"} ${e.message}`;
-}
-/** "/x/1" → ".x[1]". */
-function jsonPointerToPath(pointer) {
-    let out = "";
-    for (const part of pointer.split("/").slice(1))
-        out += /^\d+$/.test(part) ? `[${part}]` : `.${part}`;
-    return out;
-}
-function valueAt(data, pointer) {
-    let v = data;
-    for (const part of pointer.split("/").slice(1)) {
-        if (v === null || typeof v !== "object")
-            return undefined;
-        v = v[part];
-    }
-    return v;
-}
-/**
- * Reads a line that failed JSON.parse once more with bare NaN, Infinity and -Infinity tokens (outside
- * strings) replaced by marker strings, so that the runs whose points hold them can be named. Returns
- * undefined when the line is not JSON even so.
- */
-function parseWithNonFinite(line) {
-    if (!/NaN|Infinity/.test(line))
-        return undefined;
-    let out = "";
-    let inString = false;
-    let i = 0;
-    while (i < line.length) {
-        const c = line[i];
-        if (inString) {
-            out += c;
-            if (c === "\\") {
-                out += line[i + 1] ?? "";
-                i += 2;
-                continue;
-            }
-            if (c === '"')
-                inString = false;
-            i++;
-            continue;
-        }
-        if (c === '"') {
-            inString = true;
-            out += c;
-            i++;
-            continue;
-        }
-        const token = line.startsWith("-Infinity", i) ? "-Infinity" : line.startsWith("Infinity", i) ? "Infinity" : line.startsWith("NaN", i) ? "NaN" : null;
-        if (token !== null) {
-            out += JSON.stringify(NON_FINITE + token);
-            i += token.length;
-            continue;
-        }
-        out += c;
-        i++;
-    }
-    try {
-        return JSON.parse(out);
-    }
-    catch {
-        return undefined;
     }
 }
 
-;// CONCATENATED MODULE: ./build/package/runner/execute.js
+
+/***/ }),
+
+/***/ 5585:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   l: () => (/* binding */ executeRun)
+/* harmony export */ });
+/* harmony import */ var _core_rng_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2906);
+/* harmony import */ var _recorder_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(8022);
 
 
 /** Counts evaluations and catches the value at the iterate, once per step. */
@@ -12813,13 +13297,13 @@ function sameValues(a, b) {
 }
 /** Runs one case with one seed and returns its metrics. Never throws for optimizer faults. */
 function executeRun(spec, seedIndex, suiteSeed, factory, definition, options = {}) {
-    const runSeed = (0,rng/* deriveRunSeed */.EK)(suiteSeed, spec.problemKey, seedIndex);
-    const seedHex = (0,rng/* seedToHex */.K$)(runSeed);
-    const problem = definition.create(spec.params, { noise: (0,rng/* runStream */.G5)(runSeed, rng/* STREAM */.dY.noise) });
+    const runSeed = (0,_core_rng_js__WEBPACK_IMPORTED_MODULE_0__/* .deriveRunSeed */ .EK)(suiteSeed, spec.problemKey, seedIndex);
+    const seedHex = (0,_core_rng_js__WEBPACK_IMPORTED_MODULE_0__/* .seedToHex */ .K$)(runSeed);
+    const problem = definition.create(spec.params, { noise: (0,_core_rng_js__WEBPACK_IMPORTED_MODULE_0__/* .runStream */ .G5)(runSeed, _core_rng_js__WEBPACK_IMPORTED_MODULE_0__/* .STREAM */ .dY.noise) });
     const dim = problem.dim;
     const x = new Float64Array(dim);
-    problem.start(x, (0,rng/* runStream */.G5)(runSeed, rng/* STREAM */.dY.start));
-    const recorder = new runner_recorder/* RunRecorder */.K(spec, problem.fStar, options.scratch);
+    problem.start(x, (0,_core_rng_js__WEBPACK_IMPORTED_MODULE_0__/* .runStream */ .G5)(runSeed, _core_rng_js__WEBPACK_IMPORTED_MODULE_0__/* .STREAM */ .dY.start));
+    const recorder = new _recorder_js__WEBPACK_IMPORTED_MODULE_1__/* .RunRecorder */ .K(spec, problem.fStar, options.scratch);
     const done = (stop, evaluations, error) => ({
         metrics: recorder.finish({ seed: seedIndex, runSeed: seedHex, stop, evaluations, error }),
         scratch: recorder.scratch,
@@ -12924,412 +13408,35 @@ function message(err) {
     return err instanceof Error ? err.message : String(err);
 }
 
-// EXTERNAL MODULE: ./build/package/runner/resolve.js + 2 modules
-var resolve = __nccwpck_require__(5639);
-;// CONCATENATED MODULE: ./build/package/runner/scenarios.js
-/**
- * Scenarios: extra cases that run optimizers under the conditions real regressions hid behind — a
- * resume from exported state, a learning-rate change mid-run, hyperparameters such as a large ε, a
- * problem with sparse gradients or a zero loss gradient under weight decay (config `scenarios:`,
- * docs/adapters.md). A scenario runs for every optimizer that declares what it needs: the capability
- * (`exportState`/`importState` for a resume, `setLearningRate` for a learning-rate change) and every
- * hyperparameter it sets. Each scenario case is a normal case with its own metrics, named
- * `optimizer/default@scenario/problemKey`.
- *
- * A resume case runs each seed twice: uninterrupted, and interrupted after step `at` (state exported
- * through JSON, imported into a fresh instance, run continued on the same problem instance). Its metrics
- * are those of the interrupted run, plus `resume`: equal when every iterate matched the uninterrupted
- * run's bit for bit, else the first step that differed.
- *
- * Cost: a resume case costs two runs per seed, plus one 64-bit hash of the iterate per step per run.
- */
-
-
-
-
-
-/** The cases the config's scenarios add to `cases` (the suite's ordinary cases), in a stable order. */
-function expandScenarios(config, cases, file, options) {
-    const out = [];
-    (config.scenarios ?? []).forEach((sc, si) => {
-        const where = `config ${file}: scenarios[${si}]`;
-        for (const o of config.optimizers) {
-            if (sc.optimizers && !sc.optimizers.includes(o.name))
-                continue;
-            const explicit = sc.optimizers?.includes(o.name) === true;
-            const bases = sc.problem
-                ? [scenarioProblemCase(config, sc, cases, o.name, `${where}.problem`)].filter((c) => c !== null)
-                : cases.filter((c) => c.optimizer === o.name && c.set === "default" && (!sc.problems || sc.problems.includes(c.problem)));
-            for (const base of bases) {
-                const missing = missingNeeds(sc, options.declare(o.name, base), base);
-                if (missing !== null) {
-                    if (explicit)
-                        throw new InputError(`${where} (${quote(sc.name)}) lists optimizer ${quote(o.name)}, which ${missing}`);
-                    continue;
-                }
-                for (const [key, step] of [["resume", sc.resume?.at], ["lrChange", sc.lrChange?.at]]) {
-                    if (step !== undefined && step >= base.budget.steps) {
-                        throw new InputError(`${where}.${key}.at must be below the step budget (${base.budget.steps}) of case ${base.id}, got ${step}`);
-                    }
-                }
-                const given = { ...base.hyper, ...(sc.hyper ?? {}) };
-                const hyper = sortObject(options.resolveHyper(base.use, given, `${where}.hyper`));
-                const scenario = {
-                    name: sc.name,
-                    ...(sc.resume ? { resume: { at: sc.resume.at } } : {}),
-                    ...(sc.lrChange
-                        ? { lrChange: { at: sc.lrChange.at, lr: sc.lrChange.lr ?? sc.lrChange.factor * hyper.lr } }
-                        : {}),
-                };
-                const set = `${base.set}@${sc.name}`;
-                out.push({ ...base, id: `${o.name}/${set}/${base.problemKey}`, set, hyper, scenario });
-            }
-        }
-    });
-    return out;
-}
-/** Why an optimizer cannot run a scenario (completes "which ..."), or null if it can. */
-function missingNeeds(sc, decl, base) {
-    if (sc.resume && !decl.state)
-        return "has no exportState/importState (needed by resume)";
-    if (sc.lrChange && !decl.lr)
-        return "has no setLearningRate (needed by lrChange)";
-    if (sc.lrChange?.factor !== undefined && typeof base.hyper.lr !== "number") {
-        return "has no numeric lr hyperparameter (needed by lrChange.factor)";
-    }
-    const absent = Object.keys(sc.hyper ?? {}).filter((name) => !decl.hyperNames.includes(name));
-    if (absent.length > 0)
-        return `does not declare the hyperparameter${absent.length > 1 ? "s" : ""} ${absent.join(", ")}`;
-    return null;
-}
-/** A default-set case of `optimizer` on the scenario's own problem, built as the suite builds cases. */
-function scenarioProblemCase(config, sc, cases, optimizer, where) {
-    const template = cases.find((c) => c.optimizer === optimizer && c.set === "default");
-    if (template === undefined)
-        return null;
-    const p = sc.problem;
-    let def;
-    try {
-        def = getProblem(p.use);
-    }
-    catch {
-        throw new InputError(`${where}.use ${quote(p.use)} is not a known problem (see gradgate problems)`);
-    }
-    const params = resolveProblemParams(def, p.params ?? {}, where);
-    const probe = createProblem(def.name, params, { noise: new Pcg32(0n, 0n) });
-    const budget = { ...config.budget, ...(p.budget ?? {}) };
-    const optimizerConfig = config.optimizers.find((o) => o.name === optimizer);
-    return {
-        ...template,
-        // Completed with the optimizer's defaults by ExpandOptions.resolveHyper.
-        hyper: { ...(optimizerConfig.hyper ?? {}) },
-        problem: def.name,
-        problemKey: problemKey(def, params),
-        params: sortObject(params),
-        dim: probe.dim,
-        fStar: probe.fStar,
-        fStarKind: probe.fStarKind,
-        budget,
-        checkpoints: logCheckpoints(budget.steps),
-        fingerprintSteps: probe.dim <= config.fingerprint.maxDim ? Math.min(config.fingerprint.steps, budget.steps) : 0,
-        measureEvery: def.measureEvery ?? 1,
-    };
-}
-// ------------------------------------------------------------------ running
-/**
- * Per-step 64-bit hashes of the iterates of one run (two 32-bit FNV-1a lanes over the bytes), enough to
- * find the first step where two trajectories differ without keeping them.
- */
-class TrajectoryHashes {
-    hashes;
-    /** Steps recorded (1 … count). */
-    count = 0;
-    constructor(steps) {
-        this.hashes = new Uint32Array(2 * Math.min(Math.max(steps, 1), 1 << 24));
-    }
-    /** Records x_step (steps arrive in order from 1). */
-    record = (step, x) => {
-        if (2 * step > this.hashes.length) {
-            const grown = new Uint32Array(this.hashes.length * 2);
-            grown.set(this.hashes);
-            this.hashes = grown;
-        }
-        const words = new Uint32Array(x.buffer, x.byteOffset, x.length * 2);
-        let a = 0x811c9dc5;
-        let b = 0x01000193 ^ 0x9e3779b9;
-        for (let i = 0; i < words.length; i++) {
-            const w = words[i];
-            a = Math.imul(a ^ (w & 0xffff), 0x01000193);
-            a = Math.imul(a ^ (w >>> 16), 0x01000193);
-            b = Math.imul(b ^ w, 0x5bd1e995);
-            b ^= b >>> 15;
-        }
-        this.hashes[2 * (step - 1)] = a >>> 0;
-        this.hashes[2 * (step - 1) + 1] = b >>> 0;
-        this.count = step;
-    };
-    /** First step (from 1) where the trajectories differ, or null when they are equal step for step. */
-    firstDifference(other) {
-        const n = Math.min(this.count, other.count);
-        for (let i = 0; i < 2 * n; i++)
-            if (this.hashes[i] !== other.hashes[i])
-                return (i >> 1) + 1;
-        return this.count === other.count ? null : n + 1;
-    }
-}
-/** The `resume` field of a resume scenario's metrics. */
-function resumeVerdict(plain, resumed, resumedMetrics) {
-    if (resumedMetrics.stop === "error")
-        return { equal: false, firstDifference: null };
-    const first = plain.firstDifference(resumed);
-    return { equal: first === null, firstDifference: first };
-}
-/** A deep copy of a state through JSON, as a checkpoint file (or the protocol) would carry it. */
-function copyState(state) {
-    return JSON.parse(JSON.stringify(state));
-}
-/**
- * Runs one seed of a scenario case in-process (cases with `scenario.resume` or `scenario.lrChange`;
- * other scenario cases are ordinary runs). Never throws for optimizer faults.
- */
-function executeScenarioRun(spec, seedIndex, suiteSeed, factory, definition, options = {}) {
-    const sc = spec.scenario;
-    if (sc?.lrChange) {
-        const { at, lr } = sc.lrChange;
-        return executeRun(spec, seedIndex, suiteSeed, factory, definition, {
-            ...options,
-            beforeStep: (k, optimizer) => {
-                if (k !== at + 1)
-                    return;
-                if (typeof optimizer.setLearningRate !== "function") {
-                    throw new Error(`setLearningRate before step ${k} failed: the optimizer has no setLearningRate`);
-                }
-                try {
-                    optimizer.setLearningRate(lr);
-                }
-                catch (err) {
-                    throw new Error(`setLearningRate before step ${k} failed: ${scenarios_text(err)}`);
-                }
-            },
-        });
-    }
-    if (sc?.resume) {
-        const { at } = sc.resume;
-        const plain = new TrajectoryHashes(spec.budget.steps);
-        const first = executeRun(spec, seedIndex, suiteSeed, factory, definition, { ...options, afterStep: plain.record });
-        const resumed = new TrajectoryHashes(spec.budget.steps);
-        const second = executeRun(spec, seedIndex, suiteSeed, factory, definition, {
-            ...options,
-            scratch: first.scratch,
-            afterStep: resumed.record,
-            beforeStep: (k, optimizer) => (k === at + 1 ? restart(optimizer, factory, spec, at) : undefined),
-        });
-        return { metrics: { ...second.metrics, resume: resumeVerdict(plain, resumed, second.metrics) }, scratch: second.scratch };
-    }
-    return executeRun(spec, seedIndex, suiteSeed, factory, definition, options);
-}
-/** Exports the state after step `at` and imports a JSON copy into a fresh instance. */
-function restart(optimizer, factory, spec, at) {
-    if (typeof optimizer.exportState !== "function") {
-        throw new Error(`exportState after step ${at} failed: the optimizer has no exportState`);
-    }
-    let state;
-    try {
-        state = copyState(optimizer.exportState());
-    }
-    catch (err) {
-        throw new Error(`exportState after step ${at} failed: ${scenarios_text(err)}`);
-    }
-    let fresh;
-    try {
-        fresh = factory.create(spec.hyper, spec.dim);
-    }
-    catch (err) {
-        throw new Error(`creating the optimizer failed: ${scenarios_text(err)}`);
-    }
-    if (typeof fresh.importState !== "function") {
-        throw new Error(`importState before step ${at + 1} failed: the optimizer has no importState`);
-    }
-    try {
-        fresh.importState(state);
-    }
-    catch (err) {
-        throw new Error(`importState before step ${at + 1} failed: ${scenarios_text(err)}`);
-    }
-    return fresh;
-}
-function scenarios_text(err) {
-    return err instanceof Error ? err.message : String(err);
-}
-function sortObject(o) {
-    return Object.fromEntries(Object.entries(o).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)));
-}
-
-;// CONCATENATED MODULE: ./build/package/runner/batch.js
-
-
-
-
-
-class RunBatch {
-    suite;
-    optimizers = new Map();
-    problems = new Map();
-    sessions = new Map();
-    scratch;
-    starts = [];
-    total;
-    constructor(suite) {
-        this.suite = suite;
-        let n = 0;
-        for (const c of suite.cases) {
-            this.starts.push(n);
-            n += c.seeds;
-        }
-        this.total = n;
-    }
-    /** Number of runs in the suite. */
-    get size() {
-        return this.total;
-    }
-    /** (case index, seed index) of an item. */
-    locate(item) {
-        let lo = 0;
-        let hi = this.starts.length - 1;
-        while (lo < hi) {
-            const mid = (lo + hi + 1) >> 1;
-            if (this.starts[mid] <= item)
-                lo = mid;
-            else
-                hi = mid - 1;
-        }
-        return [lo, item - this.starts[lo]];
-    }
-    async runItems(items) {
-        const out = new Array(items.length);
-        const byAdapter = new Map();
-        const local = [];
-        items.forEach((item, j) => {
-            const adapter = this.processAdapterOf(this.suite.cases[this.locate(item)[0]].use);
-            if (adapter === null)
-                local.push(j);
-            else {
-                let positions = byAdapter.get(adapter);
-                if (positions === undefined)
-                    byAdapter.set(adapter, (positions = []));
-                positions.push(j);
-            }
-        });
-        await Promise.all([...byAdapter].map(async ([adapter, positions]) => {
-            const metrics = await this.runProcessItems(adapter, positions.map((j) => items[j]));
-            positions.forEach((j, i) => (out[j] = metrics[i]));
-        }));
-        for (const j of local)
-            out[j] = await this.runLocalItem(items[j]);
-        return out;
-    }
-    async runItem(item) {
-        return (await this.runItems([item]))[0];
-    }
-    /** Ends the optimizer processes this batch started. */
-    async close() {
-        const sessions = [...this.sessions.values()];
-        this.sessions.clear();
-        await Promise.all(sessions.map((s) => s.close()));
-    }
-    async runLocalItem(item) {
-        const [ci, si] = this.locate(item);
-        const spec = this.suite.cases[ci];
-        let loaded = this.optimizers.get(spec.use);
-        if (loaded === undefined) {
-            loaded = (0,resolve/* loadOptimizer */.uk)(spec.use, `case ${spec.id}`, this.suite.adapters);
-            this.optimizers.set(spec.use, loaded);
-        }
-        const { factory, untrusted } = await loaded;
-        const def = this.problem(spec.problem);
-        const run = spec.scenario?.resume || spec.scenario?.lrChange ? executeScenarioRun : executeRun;
-        const { metrics, scratch } = run(spec, si, this.suite.seed, factory, def, {
-            verifyIterate: untrusted,
-            scratch: this.scratch,
-        });
-        this.scratch = scratch;
-        return metrics;
-    }
-    /** The process adapter serving `use` ("NAME:optimizer" with NAME declared), or null. */
-    processAdapterOf(use) {
-        const i = use.indexOf(":");
-        const name = i < 0 ? "" : use.slice(0, i);
-        return this.suite.adapters?.processes[name] !== undefined ? name : null;
-    }
-    problem(name) {
-        let def = this.problems.get(name);
-        if (def === undefined) {
-            def = (0,problems/* getProblem */.Ai)(name);
-            this.problems.set(name, def);
-        }
-        return def;
-    }
-    /** Runs items of one process adapter together; resume scenarios add an uninterrupted twin per run. */
-    async runProcessItems(adapter, items) {
-        let session = this.sessions.get(adapter);
-        if (session === undefined) {
-            session = new ProcessSession(this.suite.adapters.processes[adapter]);
-            this.sessions.set(adapter, session);
-        }
-        const requests = [];
-        const plan = [];
-        for (const item of items) {
-            const [ci, si] = this.locate(item);
-            const spec = this.suite.cases[ci];
-            const base = {
-                spec,
-                seedIndex: si,
-                suiteSeed: this.suite.seed,
-                definition: this.problem(spec.problem),
-                optimizer: spec.use.slice(adapter.length + 1),
-            };
-            const sc = spec.scenario;
-            if (sc?.resume) {
-                const plain = new TrajectoryHashes(spec.budget.steps);
-                const resumed = new TrajectoryHashes(spec.budget.steps);
-                requests.push({ ...base, control: { afterStep: plain.record } });
-                const control = { pauseAt: sc.resume.at, action: { kind: "restart" }, afterStep: resumed.record };
-                plan.push({ at: requests.length, twin: { plain, resumed } });
-                requests.push({ ...base, control });
-            }
-            else {
-                const control = sc?.lrChange
-                    ? { pauseAt: sc.lrChange.at, action: { kind: "lr", lr: sc.lrChange.lr } }
-                    : undefined;
-                plan.push({ at: requests.length });
-                requests.push(control ? { ...base, control } : base);
-            }
-        }
-        const metrics = await session.run(requests);
-        return plan.map(({ at, twin }) => {
-            const m = metrics[at];
-            return twin ? { ...m, resume: resumeVerdict(twin.plain, twin.resumed, m) } : m;
-        });
-    }
-}
-
 
 /***/ }),
 
-/***/ 9442:
+/***/ 6460:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   H: () => (/* binding */ setWorkerEntry),
-/* harmony export */   o: () => (/* binding */ runSuite)
-/* harmony export */ });
-/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5919);
-/* harmony import */ var _batch_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3134);
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  o: () => (/* binding */ runSuite),
+  H: () => (/* binding */ setWorkerEntry)
+});
+
+;// CONCATENATED MODULE: external "node:module"
+const external_node_module_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:module");
+// EXTERNAL MODULE: external "node:url"
+var external_node_url_ = __nccwpck_require__(3136);
+// EXTERNAL MODULE: external "node:worker_threads"
+var external_node_worker_threads_ = __nccwpck_require__(5919);
+// EXTERNAL MODULE: ./build/package/runner/batch.js
+var runner_batch = __nccwpck_require__(8550);
+;// CONCATENATED MODULE: ./build/package/runner/pool.js
 /**
  * Runs a whole suite, in this thread or on worker threads. Items are handed out in chunks from one
  * queue (so a slow case does not hold up a worker's share) and put back in item order, so the results
  * are identical whatever the number of workers.
  */
+
+
 
 
 /** Where the worker script lives; a bundle may point this at itself (see setWorkerEntry). */
@@ -13344,25 +13451,35 @@ function defaultWorkerEntry() {
         return { script: new URL("./worker.js", here), eval: false, data: {} };
     // Sources (development, tests) run through tsx: register its loader in the worker, then load worker.ts.
     const target = JSON.stringify(new URL("./worker.ts", here).href);
+    // Resolved from this file, not from the working directory, so sources run from anywhere.
+    const tsx = JSON.stringify((0,external_node_url_.pathToFileURL)((0,external_node_module_namespaceObject.createRequire)(here)
+        .resolve("tsx/esm/api")
+        .replace(/\.cjs$/, ".mjs")).href);
     return {
-        script: `import("tsx/esm/api").then((m) => { m.register(); return import(/* webpackIgnore: true */ ${target}); });`,
+        script: `import(/* webpackIgnore: true */ ${tsx}).then((m) => { m.register(); return import(/* webpackIgnore: true */ ${target}); });`,
         eval: true,
         data: {},
     };
 }
 async function runSuite(suite, options = {}) {
-    const batch = new _batch_js__WEBPACK_IMPORTED_MODULE_1__/* .RunBatch */ .A(suite);
+    const batch = new runner_batch/* RunBatch */.A(suite);
     const items = options.items ?? Array.from({ length: batch.size }, (_, i) => i);
     const metrics = new Map();
     const workers = Math.max(1, Math.min(options.workers ?? 1, items.length));
     const progress = options.onProgress ?? (() => { });
     if (workers === 1) {
-        let done = 0;
-        for (const item of items) {
-            metrics.set(item, await batch.runItem(item));
-            done++;
-            if (done % 16 === 0 || done === items.length)
-                progress(done, items.length);
+        // In chunks, so runs of a process adapter travel batched as they do on worker threads.
+        const size = 64;
+        try {
+            for (let i = 0; i < items.length; i += size) {
+                const chunk = items.slice(i, i + size);
+                const got = await batch.runItems(chunk);
+                chunk.forEach((item, j) => metrics.set(item, got[j]));
+                progress(Math.min(i + size, items.length), items.length);
+            }
+        }
+        finally {
+            await batch.close();
         }
     }
     else {
@@ -13391,7 +13508,7 @@ async function runOnWorkers(suite, items, count, metrics, progress) {
             reject(err);
         };
         for (let w = 0; w < count; w++) {
-            const worker = new node_worker_threads__WEBPACK_IMPORTED_MODULE_0__.Worker(entry.script, { eval: entry.eval, workerData: { ...entry.data, suite } });
+            const worker = new external_node_worker_threads_.Worker(entry.script, { eval: entry.eval, workerData: { ...entry.data, suite } });
             pool.push(worker);
             const feed = () => {
                 if (next < chunks.length) {
@@ -13434,7 +13551,9 @@ function assemble(suite, batch, items, metrics) {
             byCase.set(ci, (runs = []));
         runs.push(metrics.get(item));
     }
-    return [...byCase.entries()].sort(([a], [b]) => a - b).map(([ci, runs]) => ({ case: suite.cases[ci], runs }));
+    return [...byCase.entries()]
+        .sort(([a], [b]) => a - b)
+        .map(([ci, runs]) => ({ case: suite.cases[ci], runs }));
 }
 
 
@@ -13521,7 +13640,9 @@ class RunRecorder {
     /** Keeps a copy of x_step for the trajectory fingerprint (first F steps only). */
     keepIterate(step, x) {
         if (step >= 1 && step <= this.spec.fingerprintSteps && this.iterates.length === step - 1) {
-            this.iterates.push(Array.from(x));
+            // JSON has no spelling for NaN or ±Infinity: a coordinate that left the finite range is kept as null.
+            const copy = Array.from(x, (v) => (Number.isFinite(v) ? v : null));
+            this.iterates.push(copy);
         }
     }
     diverge(step, kind) {
@@ -13627,203 +13748,18 @@ function logCheckpoints(steps, count = 32) {
 
 /***/ }),
 
-/***/ 5639:
+/***/ 5966:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  sx: () => (/* binding */ canonicalUse),
-  uk: () => (/* binding */ loadOptimizer),
-  eW: () => (/* binding */ referenceFactory)
-});
-
-// EXTERNAL MODULE: ./build/package/core/errors.js
-var errors = __nccwpck_require__(4552);
-// EXTERNAL MODULE: ./build/package/optimizers/index.js + 9 modules
-var optimizers = __nccwpck_require__(3857);
-// EXTERNAL MODULE: external "node:fs"
-var external_node_fs_ = __nccwpck_require__(3024);
-// EXTERNAL MODULE: external "node:path"
-var external_node_path_ = __nccwpck_require__(6760);
-// EXTERNAL MODULE: external "node:url"
-var external_node_url_ = __nccwpck_require__(3136);
-;// CONCATENATED MODULE: ./build/package/adapters/module.js
-/**
- * The in-process adapter: an optimizer from an ES module of the user's repository, implementing the
- * same `OptimizerFactory` contract as the reference optimizers (src/core/types.ts):
- *
- *   export const myAdam = {
- *     name: "my-adam", title: "...", defaults: { lr: 0.001 },      // name, title, defaults optional
- *     create(hyper, dim) { return { step(x, oracle) { ... }, exportState() {...}, ... }; },
- *   };
- *
- * JavaScript only (ESM; CommonJS through Node's interop). TypeScript sources need a build step first:
- * Node 20 cannot strip types (`use.ts` rejects .ts paths with that advice).
- *
- * Hyperparameters: the factory's `defaults` (if any) are merged under the config's values and the
- * result is passed through unchecked — the module validates its own. The code is untrusted: the run
- * loop double-checks the iterate before reusing a loss (LoadedOptimizer.untrusted → verifyIterate),
- * and `create` is wrapped so that a wrong shape becomes a clear error in the run, never a crash.
- */
-
-
-
-
-const cache = new Map();
-/**
- * Imports `path#exportName` relative to `baseDir` and checks its shape. Throws an `InputError` whose
- * message starts with `where` when the file is missing, cannot be imported, lacks the export, or the
- * export is not factory-shaped. Cached per file and export (per thread).
- */
-function loadModuleOptimizer(path, exportName, baseDir, where) {
-    const file = (0,external_node_path_.resolve)(baseDir, path);
-    const key = `${file}#${exportName}`;
-    let loaded = cache.get(key);
-    if (loaded === undefined) {
-        loaded = load(file, path, exportName, where);
-        cache.set(key, loaded);
-        loaded.catch(() => cache.delete(key));
-    }
-    return loaded;
-}
-async function load(file, path, exportName, where) {
-    const label = `module ${(0,errors/* quote */.h)(`${path}#${exportName}`)}`;
-    if (!(0,external_node_fs_.existsSync)(file))
-        throw new errors/* InputError */.d(`${where}: ${label}: no such file ${(0,errors/* quote */.h)(file)}`);
-    let namespace;
-    try {
-        namespace = (await import(/* webpackIgnore: true */ /* @vite-ignore */ (0,external_node_url_.pathToFileURL)(file).href));
-    }
-    catch (err) {
-        throw new errors/* InputError */.d(`${where}: ${label} could not be imported: ${firstLine(err)}`);
-    }
-    if (!(exportName in namespace)) {
-        const names = Object.keys(namespace).sort();
-        throw new errors/* InputError */.d(`${where}: ${label} has no export ${(0,errors/* quote */.h)(exportName)} (exports: ${names.length > 0 ? names.join(", ") : "none"})`);
-    }
-    const value = namespace[exportName];
-    return { factory: checkFactory(value, `${where}: ${label}`, exportName), file };
-}
-/**
- * Checks that `value` is factory-shaped and returns a wrapper: `defaults` validated once, `create`
- * given a frozen copy of the hyperparameters and its result checked for a `step` method.
- */
-function checkFactory(value, where, fallbackName) {
-    if (value === null || typeof value !== "object" || typeof value.create !== "function") {
-        throw new errors/* InputError */.d(`${where} must be an object with a create(hyper, dim) method (an OptimizerFactory), got ${describe(value)}`);
-    }
-    const source = value;
-    const defaults = source.defaults ?? {};
-    if (defaults === null || typeof defaults !== "object" || Array.isArray(defaults)) {
-        throw new errors/* InputError */.d(`${where}: defaults must be a mapping of hyperparameter names to values, got ${(0,errors/* quote */.h)(defaults)}`);
-    }
-    for (const [name, v] of Object.entries(defaults)) {
-        if (!isHyperValue(v)) {
-            throw new errors/* InputError */.d(`${where}: defaults.${name} must be a finite number, a boolean or a string, got ${(0,errors/* quote */.h)(v)}`);
-        }
-    }
-    const name = typeof source.name === "string" && source.name !== "" ? source.name : fallbackName;
-    const title = typeof source.title === "string" ? source.title : name;
-    const frozenDefaults = Object.freeze({ ...defaults });
-    return Object.freeze({
-        name,
-        title,
-        defaults: frozenDefaults,
-        create(hyper, dim) {
-            const instance = source.create.call(source, Object.freeze({ ...hyper }), dim);
-            if (instance === null ||
-                typeof instance !== "object" ||
-                typeof instance.step !== "function") {
-                throw new Error(`create(hyper, dim) must return an object with a step(x, oracle) method, got ${describe(instance)}`);
-            }
-            return instance;
-        },
-    });
-}
-/** The factory's defaults under the config's values (the config wins); nothing is checked. */
-function mergeModuleHyper(factory, given) {
-    return { ...factory.defaults, ...given };
-}
-/** Which optional capabilities an instance has (probed on an instance made for the purpose). */
-function instanceCapabilities(instance) {
-    return {
-        state: typeof instance.exportState === "function" && typeof instance.importState === "function",
-        lr: typeof instance.setLearningRate === "function",
-    };
-}
-function isHyperValue(v) {
-    return typeof v === "boolean" || typeof v === "string" || (typeof v === "number" && Number.isFinite(v));
-}
-function describe(value) {
-    if (typeof value === "function")
-        return "a function (export the factory object, not a class or function)";
-    if (value === null || typeof value !== "object")
-        return (0,errors/* quote */.h)(value);
-    const keys = Object.keys(value);
-    return keys.length === 0 ? "an object without methods" : `an object with ${keys.slice(0, 8).join(", ")}`;
-}
-function firstLine(err) {
-    const text = err instanceof Error ? err.message : String(err);
-    return text.split("\n")[0];
-}
-
-;// CONCATENATED MODULE: ./build/package/adapters/use.js
-/**
- * The spellings of `optimizers[].use` in a suite config, and their parser:
- *
- *   adam  |  reference:adam             a reference optimizer of gradgate itself
- *   module:./opt/my-adam.mjs#myAdam     an export of an ES module (JavaScript), path relative to the
- *                                       config file's directory; without "#name", the default export
- *   py:adam                             optimizer "adam" served by the process adapter declared as
- *                                       `adapters.py` in the same config
- *
- * "reference" and "module" are therefore reserved: no process adapter may take either name.
- */
-
-/** Names a process adapter may not take. */
-const RESERVED_ADAPTER_NAMES = Object.freeze(["reference", "module"]);
-/** File extensions of TypeScript sources, which Node 20 cannot load without a build step. */
-const TYPESCRIPT = /\.(ts|mts|cts|tsx)$/i;
-/**
- * Parses a `use` string. `adapters` are the process adapters the config declares; `where` locates the
- * string for messages (e.g. `config gradgate.yml: optimizers[2].use`).
- */
-function parseUse(use, adapters, where) {
-    const colon = use.indexOf(":");
-    if (colon < 0)
-        return { kind: "reference", name: use };
-    const prefix = use.slice(0, colon);
-    const rest = use.slice(colon + 1);
-    if (prefix === "reference")
-        return { kind: "reference", name: rest };
-    if (prefix === "module") {
-        const hash = rest.lastIndexOf("#");
-        const path = hash < 0 ? rest : rest.slice(0, hash);
-        const exportName = hash < 0 ? "default" : rest.slice(hash + 1);
-        const form = `expected module:PATH#EXPORT, e.g. "module:./opt/my-adam.mjs#myAdam"`;
-        if (!(path.startsWith("./") || path.startsWith("../") || path.startsWith("/"))) {
-            throw new errors/* InputError */.d(`${where} ${(0,errors/* quote */.h)(use)}: the module path must start with "./" or "../" (relative to the config file's directory) or "/"; ${form}`);
-        }
-        if (TYPESCRIPT.test(path)) {
-            throw new errors/* InputError */.d(`${where} ${(0,errors/* quote */.h)(use)}: ${(0,errors/* quote */.h)(path)} is TypeScript, which Node 20 cannot load directly; ` +
-                `compile it to JavaScript first (e.g. tsc) and name the .js or .mjs file (see docs/adapters.md)`);
-        }
-        if (!/^[A-Za-z_$][A-Za-z0-9_$]*$/.test(exportName)) {
-            throw new errors/* InputError */.d(`${where} ${(0,errors/* quote */.h)(use)}: ${(0,errors/* quote */.h)(exportName)} is not an export name; ${form}`);
-        }
-        return { kind: "module", path, exportName };
-    }
-    if (adapters.includes(prefix)) {
-        if (rest === "")
-            throw new errors/* InputError */.d(`${where} ${(0,errors/* quote */.h)(use)}: name the optimizer after "${prefix}:"`);
-        return { kind: "process", adapter: prefix, optimizer: rest };
-    }
-    const declared = adapters.length > 0 ? adapters.join(", ") : "none";
-    throw new errors/* InputError */.d(`${where} ${(0,errors/* quote */.h)(use)}: ${(0,errors/* quote */.h)(prefix)} is neither "reference", "module" nor a process adapter declared under adapters (declared: ${declared})`);
-}
-
-;// CONCATENATED MODULE: ./build/package/runner/resolve.js
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   eW: () => (/* binding */ referenceFactory),
+/* harmony export */   sx: () => (/* binding */ canonicalUse),
+/* harmony export */   uk: () => (/* binding */ loadOptimizer)
+/* harmony export */ });
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4552);
+/* harmony import */ var _optimizers_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2551);
+/* harmony import */ var _adapters_module_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6902);
+/* harmony import */ var _adapters_use_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(2683);
 /**
  * From a config's `use` string to something that can run in-process: a reference optimizer or a module
  * optimizer (src/adapters/module.ts). Process optimizers run through their adapter (src/runner/batch.ts).
@@ -13841,13 +13777,13 @@ function referenceFactory(use, where) {
     const canonical = canonicalUse(use);
     const [kind, name] = splitUse(canonical);
     if (kind !== "reference") {
-        throw new errors/* InputError */.d(`${where}.use ${(0,errors/* quote */.h)(use)}: "${kind}:" is not a reference optimizer (see src/adapters/use.ts)`);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where}.use ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(use)}: "${kind}:" is not a reference optimizer (see src/adapters/use.ts)`);
     }
     try {
-        return (0,optimizers/* getOptimizer */.KH)(name);
+        return (0,_optimizers_index_js__WEBPACK_IMPORTED_MODULE_0__/* .getOptimizer */ .KH)(name);
     }
     catch {
-        throw new errors/* InputError */.d(`${where}.use ${(0,errors/* quote */.h)(use)} is not a reference optimizer (known: ${optimizers/* OPTIMIZERS */.r9.map((o) => o.name).join(", ")})`);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where}.use ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(use)} is not a reference optimizer (known: ${_optimizers_index_js__WEBPACK_IMPORTED_MODULE_0__/* .OPTIMIZERS */ .r9.map((o) => o.name).join(", ")})`);
     }
 }
 /**
@@ -13856,19 +13792,295 @@ function referenceFactory(use, where) {
  * hands them to their adapter's session.
  */
 async function loadOptimizer(use, where, context) {
-    const spec = parseUse(canonicalUse(use), Object.keys(context?.processes ?? {}), `${where}.use`);
+    const spec = (0,_adapters_use_js__WEBPACK_IMPORTED_MODULE_2__/* .parseUse */ .f)(canonicalUse(use), Object.keys(context?.processes ?? {}), `${where}.use`);
     if (spec.kind === "module") {
-        const { factory } = await loadModuleOptimizer(spec.path, spec.exportName, context?.baseDir ?? process.cwd(), where);
+        if (context === undefined) {
+            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where}.use ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(use)}: module paths are relative to the config file's directory, which this ` +
+                `suite does not carry; prepare it with prepareSuite (src/adapters/prepare.ts)`);
+        }
+        const { factory } = await (0,_adapters_module_js__WEBPACK_IMPORTED_MODULE_1__/* .loadModuleOptimizer */ .kD)(spec.path, spec.exportName, context.baseDir, where);
         return { factory, untrusted: true };
     }
     if (spec.kind === "process") {
-        throw new errors/* InputError */.d(`${where}.use ${(0,errors/* quote */.h)(use)} is served by process adapter "${spec.adapter}", not in-process`);
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where}.use ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(use)} is served by process adapter "${spec.adapter}", not in-process`);
     }
     return { factory: referenceFactory(use, where), untrusted: false };
 }
 function splitUse(use) {
     const i = use.indexOf(":");
     return [use.slice(0, i), use.slice(i + 1)];
+}
+
+
+/***/ }),
+
+/***/ 8857:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Ed: () => (/* binding */ expandScenarios),
+/* harmony export */   HC: () => (/* binding */ resumeVerdict),
+/* harmony export */   k$: () => (/* binding */ TrajectoryHashes),
+/* harmony export */   rC: () => (/* binding */ executeScenarioRun)
+/* harmony export */ });
+/* unused harmony export copyState */
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4552);
+/* harmony import */ var _core_rng_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2906);
+/* harmony import */ var _problems_index_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5006);
+/* harmony import */ var _execute_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(5585);
+/* harmony import */ var _recorder_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(8022);
+/**
+ * Scenarios: extra cases that run optimizers under the conditions real regressions hid behind — a
+ * resume from exported state, a learning-rate change mid-run, hyperparameters such as a large ε, a
+ * problem with sparse gradients or a zero loss gradient under weight decay (config `scenarios:`,
+ * docs/adapters.md). A scenario runs for every optimizer that declares what it needs: the capability
+ * (`exportState`/`importState` for a resume, `setLearningRate` for a learning-rate change) and every
+ * hyperparameter it sets. Each scenario case is a normal case with its own metrics, named
+ * `optimizer/default@scenario/problemKey`.
+ *
+ * A resume case runs each seed twice: uninterrupted, and interrupted after step `at` (state exported
+ * through JSON, imported into a fresh instance, run continued on the same problem instance). Its metrics
+ * are those of the interrupted run, plus `resume`: equal when every iterate matched the uninterrupted
+ * run's bit for bit, else the first step that differed.
+ *
+ * Cost: a resume case costs two runs per seed, plus one 64-bit hash of the iterate per step per run.
+ */
+
+
+
+
+
+/** The cases the config's scenarios add to `cases` (the suite's ordinary cases), in a stable order. */
+function expandScenarios(config, cases, file, options) {
+    const out = [];
+    (config.scenarios ?? []).forEach((sc, si) => {
+        const where = `config ${file}: scenarios[${si}]`;
+        for (const o of config.optimizers) {
+            if (sc.optimizers && !sc.optimizers.includes(o.name))
+                continue;
+            const explicit = sc.optimizers?.includes(o.name) === true;
+            const bases = sc.problem
+                ? [scenarioProblemCase(config, sc, cases, o.name, `${where}.problem`)].filter((c) => c !== null)
+                : cases.filter((c) => c.optimizer === o.name &&
+                    c.set === "default" &&
+                    (!sc.problems || sc.problems.includes(c.problem)));
+            for (const base of bases) {
+                const missing = missingNeeds(sc, options.declare(o.name, base), base);
+                if (missing !== null) {
+                    if (explicit)
+                        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where} (${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(sc.name)}) lists optimizer ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(o.name)}, which ${missing}`);
+                    continue;
+                }
+                for (const [key, step] of [
+                    ["resume", sc.resume?.at],
+                    ["lrChange", sc.lrChange?.at],
+                ]) {
+                    if (step !== undefined && step >= base.budget.steps) {
+                        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where}.${key}.at must be below the step budget (${base.budget.steps}) of case ${base.id}, got ${step}`);
+                    }
+                }
+                const given = { ...base.hyper, ...(sc.hyper ?? {}) };
+                const hyper = sortObject(options.resolveHyper(base.use, given, `${where}.hyper`));
+                const scenario = {
+                    name: sc.name,
+                    ...(sc.resume ? { resume: { at: sc.resume.at } } : {}),
+                    ...(sc.lrChange
+                        ? {
+                            lrChange: {
+                                at: sc.lrChange.at,
+                                lr: sc.lrChange.lr ?? sc.lrChange.factor * hyper.lr,
+                            },
+                        }
+                        : {}),
+                };
+                const set = `${base.set}@${sc.name}`;
+                out.push({ ...base, id: `${o.name}/${set}/${base.problemKey}`, set, hyper, scenario });
+            }
+        }
+    });
+    return out;
+}
+/** Why an optimizer cannot run a scenario (completes "which ..."), or null if it can. */
+function missingNeeds(sc, decl, base) {
+    if (sc.resume && !decl.state)
+        return "has no exportState/importState (needed by resume)";
+    if (sc.lrChange && !decl.lr)
+        return "has no setLearningRate (needed by lrChange)";
+    if (sc.lrChange?.factor !== undefined && typeof base.hyper.lr !== "number") {
+        return "has no numeric lr hyperparameter (needed by lrChange.factor)";
+    }
+    const absent = Object.keys(sc.hyper ?? {}).filter((name) => !decl.hyperNames.includes(name));
+    if (absent.length > 0)
+        return `does not declare the hyperparameter${absent.length > 1 ? "s" : ""} ${absent.join(", ")}`;
+    return null;
+}
+/** A default-set case of `optimizer` on the scenario's own problem, built as the suite builds cases. */
+function scenarioProblemCase(config, sc, cases, optimizer, where) {
+    const template = cases.find((c) => c.optimizer === optimizer && c.set === "default");
+    if (template === undefined)
+        return null;
+    const p = sc.problem;
+    let def;
+    try {
+        def = (0,_problems_index_js__WEBPACK_IMPORTED_MODULE_1__/* .getProblem */ .Ai)(p.use);
+    }
+    catch {
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${where}.use ${(0,_core_errors_js__WEBPACK_IMPORTED_MODULE_3__/* .quote */ .h)(p.use)} is not a known problem (see gradgate problems)`);
+    }
+    const params = (0,_problems_index_js__WEBPACK_IMPORTED_MODULE_1__/* .resolveProblemParams */ .wN)(def, p.params ?? {}, where);
+    const probe = (0,_problems_index_js__WEBPACK_IMPORTED_MODULE_1__/* .createProblem */ .Yx)(def.name, params, { noise: new _core_rng_js__WEBPACK_IMPORTED_MODULE_0__/* .Pcg32 */ ._8(0n, 0n) });
+    const budget = { ...config.budget, ...(p.budget ?? {}) };
+    const optimizerConfig = config.optimizers.find((o) => o.name === optimizer);
+    return {
+        ...template,
+        // Completed with the optimizer's defaults by ExpandOptions.resolveHyper.
+        hyper: { ...(optimizerConfig.hyper ?? {}) },
+        problem: def.name,
+        problemKey: (0,_problems_index_js__WEBPACK_IMPORTED_MODULE_1__/* .problemKey */ .ZL)(def, params),
+        params: sortObject(params),
+        dim: probe.dim,
+        fStar: probe.fStar,
+        fStarKind: probe.fStarKind,
+        budget,
+        checkpoints: (0,_recorder_js__WEBPACK_IMPORTED_MODULE_4__/* .logCheckpoints */ .M)(budget.steps),
+        fingerprintSteps: probe.dim <= config.fingerprint.maxDim ? Math.min(config.fingerprint.steps, budget.steps) : 0,
+        measureEvery: def.measureEvery ?? 1,
+    };
+}
+// ------------------------------------------------------------------ running
+/**
+ * Per-step 64-bit hashes of the iterates of one run (two 32-bit FNV-1a lanes over the bytes), enough to
+ * find the first step where two trajectories differ without keeping them.
+ */
+class TrajectoryHashes {
+    hashes;
+    /** Steps recorded (1 … count). */
+    count = 0;
+    constructor(steps) {
+        this.hashes = new Uint32Array(2 * Math.min(Math.max(steps, 1), 1 << 24));
+    }
+    /** Records x_step (steps arrive in order from 1). */
+    record = (step, x) => {
+        if (2 * step > this.hashes.length) {
+            const grown = new Uint32Array(this.hashes.length * 2);
+            grown.set(this.hashes);
+            this.hashes = grown;
+        }
+        const words = new Uint32Array(x.buffer, x.byteOffset, x.length * 2);
+        let a = 0x811c9dc5;
+        let b = 0x01000193 ^ 0x9e3779b9;
+        for (let i = 0; i < words.length; i++) {
+            const w = words[i];
+            a = Math.imul(a ^ (w & 0xffff), 0x01000193);
+            a = Math.imul(a ^ (w >>> 16), 0x01000193);
+            b = Math.imul(b ^ w, 0x5bd1e995);
+            b ^= b >>> 15;
+        }
+        this.hashes[2 * (step - 1)] = a >>> 0;
+        this.hashes[2 * (step - 1) + 1] = b >>> 0;
+        this.count = step;
+    };
+    /** First step (from 1) where the trajectories differ, or null when they are equal step for step. */
+    firstDifference(other) {
+        const n = Math.min(this.count, other.count);
+        for (let i = 0; i < 2 * n; i++)
+            if (this.hashes[i] !== other.hashes[i])
+                return (i >> 1) + 1;
+        return this.count === other.count ? null : n + 1;
+    }
+}
+/** The `resume` field of a resume scenario's metrics. */
+function resumeVerdict(plain, resumed, resumedMetrics) {
+    if (resumedMetrics.stop === "error")
+        return { equal: false, firstDifference: null };
+    const first = plain.firstDifference(resumed);
+    return { equal: first === null, firstDifference: first };
+}
+/** A deep copy of a state through JSON, as a checkpoint file (or the protocol) would carry it. */
+function copyState(state) {
+    return JSON.parse(JSON.stringify(state));
+}
+/**
+ * Runs one seed of a scenario case in-process (cases with `scenario.resume` or `scenario.lrChange`;
+ * other scenario cases are ordinary runs). Never throws for optimizer faults.
+ */
+function executeScenarioRun(spec, seedIndex, suiteSeed, factory, definition, options = {}) {
+    const sc = spec.scenario;
+    if (sc?.lrChange) {
+        const { at, lr } = sc.lrChange;
+        return (0,_execute_js__WEBPACK_IMPORTED_MODULE_2__/* .executeRun */ .l)(spec, seedIndex, suiteSeed, factory, definition, {
+            ...options,
+            beforeStep: (k, optimizer) => {
+                if (k !== at + 1)
+                    return;
+                if (typeof optimizer.setLearningRate !== "function") {
+                    throw new Error(`setLearningRate before step ${k} failed: the optimizer has no setLearningRate`);
+                }
+                try {
+                    optimizer.setLearningRate(lr);
+                }
+                catch (err) {
+                    throw new Error(`setLearningRate before step ${k} failed: ${text(err)}`);
+                }
+            },
+        });
+    }
+    if (sc?.resume) {
+        const { at } = sc.resume;
+        const plain = new TrajectoryHashes(spec.budget.steps);
+        const first = (0,_execute_js__WEBPACK_IMPORTED_MODULE_2__/* .executeRun */ .l)(spec, seedIndex, suiteSeed, factory, definition, {
+            ...options,
+            afterStep: plain.record,
+        });
+        const resumed = new TrajectoryHashes(spec.budget.steps);
+        const second = (0,_execute_js__WEBPACK_IMPORTED_MODULE_2__/* .executeRun */ .l)(spec, seedIndex, suiteSeed, factory, definition, {
+            ...options,
+            scratch: first.scratch,
+            afterStep: resumed.record,
+            beforeStep: (k, optimizer) => (k === at + 1 ? restart(optimizer, factory, spec, at) : undefined),
+        });
+        return {
+            metrics: { ...second.metrics, resume: resumeVerdict(plain, resumed, second.metrics) },
+            scratch: second.scratch,
+        };
+    }
+    return (0,_execute_js__WEBPACK_IMPORTED_MODULE_2__/* .executeRun */ .l)(spec, seedIndex, suiteSeed, factory, definition, options);
+}
+/** Exports the state after step `at` and imports a JSON copy into a fresh instance. */
+function restart(optimizer, factory, spec, at) {
+    if (typeof optimizer.exportState !== "function") {
+        throw new Error(`exportState after step ${at} failed: the optimizer has no exportState`);
+    }
+    let state;
+    try {
+        state = copyState(optimizer.exportState());
+    }
+    catch (err) {
+        throw new Error(`exportState after step ${at} failed: ${text(err)}`);
+    }
+    let fresh;
+    try {
+        fresh = factory.create(spec.hyper, spec.dim);
+    }
+    catch (err) {
+        throw new Error(`creating the optimizer failed: ${text(err)}`);
+    }
+    if (typeof fresh.importState !== "function") {
+        throw new Error(`importState before step ${at + 1} failed: the optimizer has no importState`);
+    }
+    try {
+        fresh.importState(state);
+    }
+    catch (err) {
+        throw new Error(`importState before step ${at + 1} failed: ${text(err)}`);
+    }
+    return fresh;
+}
+function text(err) {
+    return err instanceof Error ? err.message : String(err);
+}
+function sortObject(o) {
+    return Object.fromEntries(Object.entries(o).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)));
 }
 
 
@@ -14094,8 +14306,8 @@ var __webpack_exports__ = {};
 
 // EXTERNAL MODULE: external "node:worker_threads"
 var external_node_worker_threads_ = __nccwpck_require__(5919);
-// EXTERNAL MODULE: ./build/package/runner/pool.js
-var pool = __nccwpck_require__(9442);
+// EXTERNAL MODULE: ./build/package/runner/pool.js + 1 modules
+var pool = __nccwpck_require__(6460);
 ;// CONCATENATED MODULE: ./build/package/action/worker-marker.js
 /** The key in workerData that marks a worker thread started from the bundle (see src/action/main.ts). */
 const WORKER_MARKER = "gradgateWorker";
@@ -14118,6 +14330,6 @@ else {
     // Only a bundle (plain .js) can start workers from itself; from the sources the pool uses runner/worker.ts.
     if (import.meta.url.endsWith(".js"))
         (0,pool/* setWorkerEntry */.H)(new URL(import.meta.url), { [WORKER_MARKER]: true });
-    void Promise.all(/* import() */[__nccwpck_require__.e(511), __nccwpck_require__.e(270)]).then(__nccwpck_require__.bind(__nccwpck_require__, 8270)).then(({ run }) => run());
+    void Promise.all(/* import() */[__nccwpck_require__.e(511), __nccwpck_require__.e(994)]).then(__nccwpck_require__.bind(__nccwpck_require__, 7994)).then(({ run }) => run());
 }
 

@@ -1,8 +1,8 @@
-export const id = 270;
-export const ids = [270];
+export const id = 994;
+export const ids = [994];
 export const modules = {
 
-/***/ 8270:
+/***/ 7994:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -165,12 +165,12 @@ var _2020 = __webpack_require__(2210);
 var version = __webpack_require__(6063);
 // EXTERNAL MODULE: ./build/package/problems/index.js + 22 modules
 var package_problems = __webpack_require__(5006);
-// EXTERNAL MODULE: ./build/package/optimizers/index.js + 9 modules
-var optimizers = __webpack_require__(3857);
+// EXTERNAL MODULE: ./build/package/optimizers/index.js + 7 modules
+var optimizers = __webpack_require__(2551);
 // EXTERNAL MODULE: ./build/package/core/rng.js
 var core_rng = __webpack_require__(2906);
-// EXTERNAL MODULE: ./build/package/runner/resolve.js + 2 modules
-var runner_resolve = __webpack_require__(5639);
+// EXTERNAL MODULE: ./build/package/runner/resolve.js
+var runner_resolve = __webpack_require__(5966);
 // EXTERNAL MODULE: ./build/package/runner/recorder.js
 var recorder = __webpack_require__(8022);
 ;// CONCATENATED MODULE: ./build/package/runner/suite.js
@@ -362,7 +362,7 @@ const runSchema = {
         divergence: { type: ["string", "null"], enum: ["non-finite", "blow-up", null] },
         rate: numberOrNull,
         trace: { type: "array", items: numberOrNull },
-        iterates: { type: "array", items: { type: "array", items: { type: "number" } } },
+        iterates: { type: "array", items: { type: "array", items: { type: ["number", "null"] } } },
         error: { type: "string" },
         resume: {
             type: "object",
@@ -740,8 +740,10 @@ function checkConsistency(b, where, optimizer) {
             if (run.evaluationsTo.length !== spec.ladder.length) {
                 fail(`${rf}.evaluationsTo`, `holds ${run.evaluationsTo.length} values, expected ${spec.ladder.length} (one per ladder rung)`);
             }
-            if (run.trace.length !== spec.checkpoints.length) {
-                fail(`${rf}.trace`, `holds ${run.trace.length} values, expected ${spec.checkpoints.length} (one per checkpoint)`);
+            // Extra seeds keep no trace (charts use the suite's own seeds): an empty one is expected there.
+            const traceLength = seed < spec.seeds ? spec.checkpoints.length : 0;
+            if (run.trace.length !== traceLength) {
+                fail(`${rf}.trace`, `holds ${run.trace.length} values, expected ${traceLength}${seed < spec.seeds ? " (one per checkpoint)" : " (extra seeds keep no trace)"}`);
             }
         }
     });
@@ -944,12 +946,15 @@ function stepDifference(x, y) {
         const xi = x[i];
         const yi = y[i];
         if (xi === yi) {
-            const m = Math.abs(xi);
+            const m = xi === null ? 0 : Math.abs(xi);
             if (m > scale)
                 scale = m;
             continue;
         }
         bitwise = false;
+        // null stands for a coordinate that left the finite range: any difference with it is unbounded.
+        if (xi === null || yi === null)
+            return Infinity;
         const dd = Math.abs(xi - yi);
         diff = Number.isNaN(dd) ? Infinity : Math.max(diff, dd);
         scale = Math.max(scale, Math.abs(xi), Math.abs(yi));
@@ -1210,9 +1215,24 @@ const processAdapterSchema = {
             default: {},
             description: "Seconds before the harness gives up.",
             properties: {
-                start: { type: "number", exclusiveMinimum: 0, default: 30, description: "From launch to the ready message." },
-                message: { type: "number", exclusiveMinimum: 0, default: 60, description: "From orders to the report that answers them." },
-                run: { type: "number", exclusiveMinimum: 0, default: 600, description: "Whole run, checked at every report." },
+                start: {
+                    type: "number",
+                    exclusiveMinimum: 0,
+                    default: 30,
+                    description: "From launch to the ready message.",
+                },
+                message: {
+                    type: "number",
+                    exclusiveMinimum: 0,
+                    default: 60,
+                    description: "From orders to the report that answers them.",
+                },
+                run: {
+                    type: "number",
+                    exclusiveMinimum: 0,
+                    default: 600,
+                    description: "Whole run, checked at every report.",
+                },
             },
         },
     },
@@ -1250,7 +1270,10 @@ const scenarioSchema = {
                 factor: { type: "number", exclusiveMinimum: 0 },
             },
         },
-        hyper: { ...hyper, description: "Hyperparameters set for the scenario; only optimizers that declare them run it." },
+        hyper: {
+            ...hyper,
+            description: "Hyperparameters set for the scenario; only optimizers that declare them run it.",
+        },
         problem: {
             type: "object",
             additionalProperties: false,
@@ -1508,7 +1531,12 @@ const configSchema = {
             description: "First iterates kept per run, to tell whether the arithmetic itself changed.",
             properties: {
                 steps: { type: "integer", minimum: 0, maximum: 1000, default: 20 },
-                maxDim: { type: "integer", minimum: 0, default: 10, description: "Only problems up to this dimension." },
+                maxDim: {
+                    type: "integer",
+                    minimum: 0,
+                    default: 4,
+                    description: "Only problems up to this dimension.",
+                },
             },
         },
         optimizers: {
@@ -4023,8 +4051,2653 @@ function rerunSummary(plan, budget) {
     };
 }
 
-// EXTERNAL MODULE: ./build/package/runner/pool.js
-var pool = __webpack_require__(9442);
+// EXTERNAL MODULE: ./build/package/optimizers/hyper.js
+var optimizers_hyper = __webpack_require__(650);
+// EXTERNAL MODULE: ./build/package/runner/scenarios.js
+var scenarios = __webpack_require__(8857);
+// EXTERNAL MODULE: ./build/package/adapters/child.js
+var child = __webpack_require__(5742);
+// EXTERNAL MODULE: ./build/package/adapters/module.js
+var adapters_module = __webpack_require__(6902);
+// EXTERNAL MODULE: ./build/package/adapters/session.js + 4 modules
+var adapters_session = __webpack_require__(9745);
+// EXTERNAL MODULE: ./build/package/adapters/use.js
+var adapters_use = __webpack_require__(2683);
+;// CONCATENATED MODULE: ./build/package/adapters/prepare.js
+/**
+ * Resolving a suite whose config uses adapters: `resolveSuite` plus what it cannot do synchronously.
+ *
+ * 1. Process adapters get their paths resolved against the config file's directory (`baseDir`).
+ * 2. Module optimizers are imported (a missing file or export is an error now, naming the config field)
+ *    and process adapters are started once for their handshake (a process that does not start, or does
+ *    not serve an optimizer the config names, is an error now), then closed again.
+ * 3. Hyperparameters of module and process optimizers: their declared defaults under the config's values.
+ * 4. Scenarios are expanded (src/runner/scenarios.ts) against what each optimizer declares.
+ *
+ * The result carries `adapters` (the base directory and the process adapters) to every worker; `use`
+ * strings stay as written (relative paths), so results do not depend on where the repository is checked
+ * out. Entry points call `prepareSuite(config, file, { baseDir: dirname(configPath) })` in place of
+ * `resolveSuite(config, file)`.
+ */
+
+
+
+
+
+
+
+
+
+
+
+/** The process adapters of a config with `cwd` made absolute. */
+function processAdapterSpecs(config, baseDir) {
+    const out = {};
+    for (const [name, a] of Object.entries(config.adapters ?? {})) {
+        out[name] = {
+            name,
+            command: [...a.command],
+            cwd: (0,external_node_path_.isAbsolute)(a.cwd) ? a.cwd : (0,external_node_path_.resolve)(baseDir, a.cwd),
+            env: { ...a.env },
+            maxRuns: a.maxRuns,
+            maxMessageBytes: a.maxMessageBytes,
+            timeouts: { ...a.timeouts },
+        };
+    }
+    return out;
+}
+/** Resolves the suite with its module and process optimizers and its scenarios. */
+async function prepareSuite(config, file, options) {
+    const where = `config ${file}`;
+    const processes = processAdapterSpecs(config, options.baseDir);
+    const context = { baseDir: options.baseDir, processes };
+    const adapterNames = Object.keys(processes);
+    const uses = new Map();
+    const whereOf = new Map();
+    config.optimizers.forEach((o, i) => {
+        const use = (0,runner_resolve/* canonicalUse */.sx)(o.use ?? o.name);
+        const w = `${where}: optimizers[${i}].use`;
+        uses.set(use, (0,adapters_use/* parseUse */.f)(use, adapterNames, w));
+        if (!whereOf.has(use))
+            whereOf.set(use, `${where}: optimizers[${i}]`);
+    });
+    // Module optimizers: import now, so a wrong path fails before anything runs.
+    const modules = new Map();
+    for (const [use, spec] of uses) {
+        if (spec.kind !== "module")
+            continue;
+        const loaded = await (0,adapters_module/* loadModuleOptimizer */.kD)(spec.path, spec.exportName, options.baseDir, `${whereOf.get(use)}.use`);
+        modules.set(use, loaded.factory);
+    }
+    // Process adapters: one handshake each (in parallel), then check the optimizers named.
+    const needed = [...new Set([...uses.values()].flatMap((u) => (u.kind === "process" ? [u.adapter] : [])))];
+    const served = new Map();
+    await Promise.all(needed.map(async (name) => {
+        const session = new adapters_session/* ProcessSession */.M(processes[name], { parentEnv: options.parentEnv });
+        try {
+            served.set(name, (await session.describe()).optimizers);
+        }
+        catch (err) {
+            const reason = err instanceof child/* ChildFault */.X_ ? err.reason : String(err);
+            throw new core_errors/* InputError */.d(`${where}: adapters.${name} (command ${(0,core_errors/* quote */.h)(processes[name].command)}): ${reason}`);
+        }
+        finally {
+            await session.close();
+        }
+    }));
+    const descriptions = new Map();
+    for (const [use, spec] of uses) {
+        if (spec.kind !== "process")
+            continue;
+        const list = served.get(spec.adapter);
+        const found = list.find((d) => d.name === spec.optimizer);
+        if (found === undefined) {
+            throw new core_errors/* InputError */.d(`${whereOf.get(use)}.use ${(0,core_errors/* quote */.h)(use)}: adapter "${spec.adapter}" serves no optimizer ${(0,core_errors/* quote */.h)(spec.optimizer)} ` +
+                `(it serves: ${list.map((d) => d.name).join(", ")})`);
+        }
+        descriptions.set(use, found);
+    }
+    const defaultsOf = (use) => modules.get(use)?.defaults ?? descriptions.get(use)?.defaults ?? {};
+    const resolveHyper = (use, given, w) => {
+        const spec = uses.get(use) ?? (0,adapters_use/* parseUse */.f)(use, adapterNames, w);
+        if (spec.kind === "reference")
+            return (0,optimizers_hyper/* resolveHyper */.Vn)((0,optimizers/* getOptimizer */.KH)(spec.name, w), given, w);
+        return { ...defaultsOf(use), ...given };
+    };
+    const suite = resolveSuite(config, file, { resolveForeignHyper: resolveHyper });
+    const declare = (_optimizer, base) => {
+        const spec = uses.get(base.use);
+        if (spec.kind === "reference") {
+            return { hyperNames: Object.keys((0,optimizers/* getOptimizer */.KH)(spec.name).hyperSpecs), state: true, lr: true };
+        }
+        if (spec.kind === "process") {
+            const d = descriptions.get(base.use);
+            return {
+                hyperNames: Object.keys(d.defaults ?? {}),
+                state: d.capabilities.includes("state"),
+                lr: d.capabilities.includes("lr"),
+            };
+        }
+        const factory = modules.get(base.use);
+        let caps = { state: false, lr: false };
+        try {
+            caps = (0,adapters_module/* instanceCapabilities */.QN)(factory.create(base.hyper, base.dim));
+        }
+        catch {
+            // An instance that cannot be made declares nothing; its runs will say why.
+        }
+        return { hyperNames: Object.keys(factory.defaults), ...caps };
+    };
+    const extra = (0,scenarios/* expandScenarios */.Ed)(config, suite.cases, file, { declare, resolveHyper });
+    return { ...suite, cases: [...suite.cases, ...extra], adapters: context };
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/format.js
+/** Number formats of the reference checks' messages (plain text, no locale). */
+/** Two significant digits in exponent form, as in "3.1e-2": for tolerances and differences. */
+function format_short(x) {
+    if (!Number.isFinite(x))
+        return String(x);
+    return x.toExponential(1).replace("e+", "e");
+}
+/** Four significant digits in JavaScript's shortest spelling: 0.9487, 1.2e-7, 48.98. */
+function fmt(x) {
+    return Number.isFinite(x) ? String(Number(x.toPrecision(4))) : String(x);
+}
+/** A fraction as a percentage with two significant digits: 0.0213 → "2.1%". */
+function pct(x) {
+    return `${Number((100 * x).toPrecision(2))}%`;
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/probes.js
+function probeProblem(name, title, x0, fg) {
+    const dim = x0.length;
+    const scratch = new Float64Array(dim);
+    return {
+        name,
+        title,
+        tags: ["probe"],
+        source: "constructed here for the conformance check (common practice)",
+        params: {},
+        create() {
+            return {
+                key: name,
+                dim,
+                fStar: 0,
+                fStarKind: "lower-bound",
+                xStar: null,
+                stochastic: false,
+                evaluate: fg,
+                objective: (x) => fg(x, scratch),
+                start(out) {
+                    for (let i = 0; i < dim; i++)
+                        out[i] = x0[i];
+                },
+            };
+        },
+    };
+}
+function diagonal(name, title, a, x0) {
+    return probeProblem(name, title, x0, (x, g) => {
+        let f = 0;
+        for (let i = 0; i < a.length; i++) {
+            g[i] = a[i] * x[i];
+            f += 0.5 * a[i] * x[i] * x[i];
+        }
+        return f;
+    });
+}
+const BOWL = diagonal("probe-bowl", "diagonal quadratic", [1, 3, 0.5], [1, -0.6, 0.8]);
+const VALLEY = probeProblem("probe-valley", "curved valley", [-0.8, 0.9], (x, g) => {
+    const r = x[1] - x[0] * x[0];
+    g[0] = x[0] - 1 - 8 * x[0] * r;
+    g[1] = 4 * r;
+    return 0.5 * (x[0] - 1) * (x[0] - 1) + 2 * r * r;
+});
+const FAINT = diagonal("probe-faint", "quadratic with gradients of order 1e-3", [0.004, 0.001], [0.3, -0.5]);
+const FLAT = probeProblem("probe-flat", "zero loss gradient", [1, -2, 0.5], (_x, g) => {
+    g.fill(0);
+    return 0;
+});
+/** Step sizes that keep each method stable on the bowl and the valley (curvatures up to about 9). */
+const PROBE_LR = {
+    sgd: 0.05,
+    momentum: 0.02,
+    nesterov: 0.02,
+    adagrad: 0.1,
+    rmsprop: 0.01,
+    adam: 0.01,
+    adamw: 0.01,
+};
+/** The probes for `method` and a claim (complete reference hyperparameters). */
+function probesFor(method, claim) {
+    const lr = PROBE_LR[method];
+    if (lr === undefined)
+        throw new RangeError(`probesFor: unknown method ${JSON.stringify(method)}`);
+    const probes = [
+        { id: "bowl", title: "diagonal quadratic", definition: BOWL, steps: 24, set: { lr }, requires: [] },
+        { id: "valley", title: "curved valley", definition: VALLEY, steps: 24, set: { lr }, requires: [] },
+        {
+            id: "schedule",
+            title: "learning rate cut to a quarter after step 8",
+            definition: BOWL,
+            steps: 24,
+            set: { lr },
+            requires: [],
+            lrChange: { after: 8, factor: 0.25 },
+        },
+    ];
+    if (method === "adagrad" || method === "rmsprop" || method === "adam" || method === "adamw") {
+        probes.push({
+            id: "faint",
+            title: "gradients of order 1e-3 with ε = 1e-2",
+            definition: FAINT,
+            steps: 24,
+            set: { lr: method === "adagrad" ? 0.01 : 0.002, eps: 1e-2 },
+            requires: ["eps"],
+        });
+    }
+    probes.push({
+        id: "flat",
+        title: "zero loss gradient with weight decay 0.1",
+        definition: FLAT,
+        steps: 16,
+        set: {
+            lr: method === "adam" || method === "adamw" || method === "rmsprop" ? 0.01 : 0.1,
+            weightDecay: 0.1,
+        },
+        requires: ["weightDecay"],
+    });
+    if ((method === "adam" || method === "adamw") && claim.amsgrad === true) {
+        probes.push({
+            id: "amsgrad",
+            title: "second moment falling early (β2 = 0.9)",
+            definition: BOWL,
+            steps: 40,
+            set: { lr: 0.05, beta2: 0.9 },
+            requires: ["beta2"],
+        });
+    }
+    return probes;
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/trajectory.js
+/**
+ * Trajectories: how the reference checks step an optimizer under test. A check asks for the iterates
+ * x₀, x₁, …, x_n of one run — a problem with its parameters, hyperparameters, a seed, a number of steps
+ * and optionally a learning-rate change between two steps — and reads them as they come. Everything a
+ * check measures (gaps, time averages, step-by-step agreement with a reference form) is computed from
+ * those iterates with the harness's own copy of the problem, never from numbers the optimizer reports.
+ *
+ * A `TrajectorySource` hides where the optimizer lives. `inProcessSource` wraps any `OptimizerFactory`
+ * (the reference optimizers and in-process modules); a process adapter can implement the same interface
+ * with its run control (pause after a step, change the learning rate, observe every iterate).
+ *
+ * The start point and the gradient noise are derived exactly as in the run loop (src/runner/execute.ts):
+ * run seed = deriveRunSeed(suiteSeed, problemKey, seedIndex), start perturbation from stream `start`,
+ * noise from stream `noise`. So a check's run with seed index i starts where the suite's run i starts.
+ */
+
+/** Creates the problem instance of a request, bound to the request's noise stream (as the run loop does). */
+function requestProblem(request) {
+    const runSeed = (0,core_rng/* deriveRunSeed */.EK)(request.suiteSeed, request.problemKey, request.seedIndex);
+    const problem = request.definition.create(request.params, { noise: (0,core_rng/* runStream */.G5)(runSeed, core_rng/* STREAM */.dY.noise) });
+    const x0 = new Float64Array(problem.dim);
+    problem.start(x0, (0,core_rng/* runStream */.G5)(runSeed, core_rng/* STREAM */.dY.start));
+    return { problem, x0 };
+}
+function message(err) {
+    return err instanceof Error ? err.message : String(err);
+}
+/** True when every coordinate is finite. */
+function finite(x) {
+    for (let i = 0; i < x.length; i++)
+        if (!Number.isFinite(x[i]))
+            return false;
+    return true;
+}
+/**
+ * Steps `factory`'s optimizer in this thread, on the request's problem instance (the optimizer's
+ * evaluations go straight to the problem). Faults of the optimizer end the run with a sentence saying
+ * what happened; nothing it does makes `run` reject. A run stops at the first non-finite iterate.
+ */
+function runInProcess(factory, request, observe) {
+    const { problem, x0 } = requestProblem(request);
+    const x = x0;
+    let optimizer;
+    try {
+        optimizer = factory.create(request.hyper, problem.dim);
+    }
+    catch (err) {
+        return { steps: 0, error: `creating the optimizer failed: ${message(err)}`, lrChange: "none" };
+    }
+    const change = request.lrChange;
+    if (change !== undefined && typeof optimizer.setLearningRate !== "function") {
+        return { steps: 0, lrChange: "unsupported" };
+    }
+    const lrChange = change === undefined ? "none" : "applied";
+    observe(0, x);
+    const oracle = { evaluate: (p, g) => problem.evaluate(p, g) };
+    for (let k = 1; k <= request.steps; k++) {
+        try {
+            optimizer.step(x, oracle);
+        }
+        catch (err) {
+            return { steps: k - 1, error: `step ${k} threw: ${message(err)}`, lrChange };
+        }
+        observe(k, x);
+        if (!finite(x))
+            return { steps: k, error: `the iterate is not finite after step ${k}`, lrChange };
+        if (change !== undefined && k === change.after) {
+            try {
+                optimizer.setLearningRate(change.lr);
+            }
+            catch (err) {
+                return {
+                    steps: k,
+                    error: `setLearningRate(${change.lr}) after step ${k} threw: ${message(err)}`,
+                    lrChange,
+                };
+            }
+        }
+    }
+    return { steps: request.steps, lrChange };
+}
+/** A `TrajectorySource` for any in-process `OptimizerFactory` (reference optimizers, module adapters). */
+function inProcessSource(factory, label = factory.name) {
+    return {
+        label,
+        hyperNames: Object.keys(factory.defaults),
+        run: (request, observe) => Promise.resolve(runInProcess(factory, request, observe)),
+    };
+}
+
+// EXTERNAL MODULE: ./build/package/optimizers/state.js
+var optimizers_state = __webpack_require__(6425);
+;// CONCATENATED MODULE: ./build/package/reference/nesterov-lr-outside.js
+
+
+const NESTEROV_LR_OUTSIDE_HYPER = {
+    lr: {
+        type: "number",
+        exclusiveMinimum: 0,
+        default: 0.01,
+        description: "Learning rate η (common practice).",
+    },
+    momentum: {
+        type: "number",
+        minimum: 0,
+        exclusiveMaximum: 1,
+        default: 0.9,
+        description: "Momentum coefficient γ in [0, 1) (common practice).",
+    },
+    form: {
+        type: "choice",
+        choices: ["lookahead", "stored-lookahead"],
+        default: "stored-lookahead",
+        description: '"lookahead": x holds w; "stored-lookahead": x holds the look-ahead point (as frameworks write it).',
+    },
+    weightDecay: { type: "number", minimum: 0, default: 0, description: "Coupled L2 coefficient λ." },
+};
+const LAYOUT = { step: "count", lr: "lr", buffer: "vector" };
+class NesterovLrOutside {
+    dim;
+    grad;
+    buffer;
+    ahead;
+    lr;
+    gamma;
+    weightDecay;
+    stored;
+    t = 0;
+    constructor(hyper, dim) {
+        this.dim = dim;
+        this.stored = hyper.form === "stored-lookahead";
+        this.grad = new Float64Array(dim);
+        this.buffer = new Float64Array(dim);
+        this.ahead = new Float64Array(this.stored ? 0 : dim);
+        this.lr = hyper.lr;
+        this.gamma = hyper.momentum;
+        this.weightDecay = hyper.weightDecay;
+    }
+    step(x, oracle) {
+        (0,optimizers_hyper/* checkIterate */.rA)(x, this.dim, "nesterov-lr-outside");
+        const g = this.grad;
+        const b = this.buffer;
+        const lr = this.lr;
+        const gamma = this.gamma;
+        const wd = this.weightDecay;
+        if (this.stored) {
+            oracle.evaluate(x, g);
+            for (let i = 0; i < this.dim; i++) {
+                const gi = g[i] + wd * x[i];
+                const bi = gamma * b[i] + gi;
+                b[i] = bi;
+                x[i] -= lr * (gi + gamma * bi);
+            }
+        }
+        else {
+            const a = this.ahead;
+            for (let i = 0; i < this.dim; i++)
+                a[i] = x[i] - lr * gamma * b[i];
+            oracle.evaluate(a, g);
+            for (let i = 0; i < this.dim; i++) {
+                const bi = gamma * b[i] + (g[i] + wd * a[i]);
+                b[i] = bi;
+                x[i] -= lr * bi;
+            }
+        }
+        this.t++;
+    }
+    exportState() {
+        return { step: this.t, lr: this.lr, buffer: (0,optimizers_state/* saveVector */.js)(this.buffer) };
+    }
+    importState(state) {
+        const s = (0,optimizers_state/* checkState */.We)(state, LAYOUT, this.dim, "importState nesterov-lr-outside");
+        this.t = s.step;
+        this.lr = s.lr;
+        (0,optimizers_state/* loadVector */.YW)(s, "buffer", this.buffer);
+    }
+    setLearningRate(lr) {
+        this.lr = (0,optimizers_hyper/* checkLearningRate */.N1)(lr, "setLearningRate nesterov-lr-outside");
+    }
+}
+const nesterovLrOutside = (0,optimizers_hyper/* defineOptimizer */.B)({
+    name: "nesterov-lr-outside",
+    title: "Nesterov's accelerated gradient, learning rate outside the velocity (common practice)",
+    hyperSpecs: NESTEROV_LR_OUTSIDE_HYPER,
+    build: (hyper, dim) => new NesterovLrOutside(hyper, dim),
+});
+
+;// CONCATENATED MODULE: ./build/package/reference/variants.js
+
+
+const SUTSKEVER = "Sutskever, Martens, Dahl & Hinton (2013), On the importance of initialization and momentum in deep learning, ICML, PMLR 28(3):1139–1147";
+const KINGMA_BA = "Kingma & Ba (2015), Adam: A Method for Stochastic Optimization, ICLR, arXiv:1412.6980";
+const LOSHCHILOV = "Loshchilov & Hutter (2019), Decoupled Weight Decay Regularization, ICLR, arXiv:1711.05101";
+const REDDI = "Reddi, Kale & Kumar (2018), On the Convergence of Adam and Beyond, ICLR, Algorithm 2";
+/** The reference options that select a form; a claim never sets them (a config pins them with `expect`). */
+const CONVENTION_KEYS = ["form", "epsPlacement", "amsgradMax", "decayScaledByLr"];
+/** The reference optimizer of each method. */
+const METHOD_FACTORIES = {
+    sgd: optimizers/* sgd */.D5,
+    momentum: optimizers/* momentum */.Pg,
+    nesterov: optimizers/* nesterov */.fX,
+    adagrad: optimizers/* adagrad */.bw,
+    rmsprop: optimizers/* rmsprop */.m0,
+    adam: optimizers/* adam */.Ch,
+    adamw: optimizers/* adamw */.dp,
+};
+const variants_METHODS = Object.keys(METHOD_FACTORIES);
+const MOMENTUM_FORM = {
+    key: "form",
+    title: "learning-rate placement",
+    values: [
+        {
+            key: "lr-inside",
+            label: "learning rate inside the velocity (v = γv + ηg; w −= v)",
+            accepted: true,
+            source: `Polyak (1964); ${SUTSKEVER}, eq. (1)–(2)`,
+        },
+        {
+            key: "lr-outside",
+            label: "learning rate outside the velocity (b = γb + g; w −= η·b)",
+            accepted: true,
+            source: "common practice (the same trajectory as v = η·b while the learning rate is constant)",
+        },
+    ],
+    exposedBy: ["schedule"],
+    whenUnprobed: "indistinguishable at constant lr: both forms give the same iterates, and the optimizer cannot change its learning rate between steps",
+};
+const NESTEROV_FORM = {
+    key: "form",
+    title: "look-ahead storage",
+    values: [
+        {
+            key: "lookahead",
+            label: "the parameters hold w and the gradient is taken at the look-ahead point w − γv",
+            accepted: true,
+            source: `${SUTSKEVER}, eq. (3)–(4)`,
+        },
+        {
+            key: "stored-lookahead",
+            label: "the parameters hold the look-ahead point u = w − γv and the gradient is taken there",
+            accepted: true,
+            source: "Bengio, Boulanger-Lewandowski & Pascanu (2013), Advances in optimizing recurrent networks, ICASSP, §3.5, arXiv:1212.0901",
+        },
+    ],
+    exposedBy: ["bowl", "valley", "schedule", "flat"],
+    whenUnprobed: "no probe ran",
+};
+const NESTEROV_LR = {
+    key: "lrPlacement",
+    title: "learning-rate placement",
+    values: [
+        {
+            key: "lr-inside",
+            label: "learning rate inside the velocity (v = γv + ηg)",
+            accepted: true,
+            source: `${SUTSKEVER}, eq. (3)–(4)`,
+        },
+        {
+            key: "lr-outside",
+            label: "learning rate outside the velocity (b = γb + g, steps of η·(…))",
+            accepted: true,
+            source: "common practice (the same trajectory as v = η·b while the learning rate is constant)",
+        },
+    ],
+    exposedBy: ["schedule"],
+    whenUnprobed: MOMENTUM_FORM.whenUnprobed,
+};
+const RMSPROP_EPS = {
+    key: "epsPlacement",
+    title: "ε placement",
+    values: [
+        {
+            key: "outside",
+            label: "ε outside the square root, η·g/(√E + ε)",
+            accepted: true,
+            source: "common practice",
+        },
+        {
+            key: "inside",
+            label: "ε inside the square root, η·g/√(E + ε)",
+            accepted: true,
+            source: "Graves (2013), Generating Sequences With Recurrent Neural Networks, §4, arXiv:1308.0850; Ruder (2016), arXiv:1609.04747, §4.5",
+        },
+    ],
+    exposedBy: ["faint"],
+    whenUnprobed: "not probed: the optimizer has no setting for ε, so the probe with a large ε could not run",
+};
+const ADAM_EPS = {
+    key: "epsPlacement",
+    title: "ε placement",
+    values: [
+        {
+            key: "corrected",
+            label: "ε added after bias correction, α·m̂/(√v̂ + ε)",
+            accepted: true,
+            source: `${KINGMA_BA}, Algorithm 1`,
+        },
+        {
+            key: "efficient",
+            label: "ε added before bias correction, αₜ·m/(√v + ε) with αₜ = α·√(1 − β2ᵗ)/(1 − β1ᵗ)",
+            accepted: true,
+            source: `${KINGMA_BA}, §2 (the efficient form)`,
+        },
+    ],
+    exposedBy: ["faint"],
+    whenUnprobed: "not probed: the optimizer has no setting for ε, so the probe with a large ε could not run",
+};
+function decayAxis(claimed) {
+    const isAdamW = claimed === "adamw";
+    return {
+        key: "decay",
+        title: "weight decay",
+        values: [
+            {
+                key: "coupled",
+                label: "coupled L2, λθ added to the gradient before the moment estimates",
+                accepted: !isAdamW,
+                source: "common practice (Adam with L2 regularisation); " + `${LOSHCHILOV}, §2`,
+                meaning: isAdamW
+                    ? "that is Adam with L2 regularisation, where the decay goes through the moment estimates, which AdamW avoids"
+                    : undefined,
+            },
+            {
+                key: "decoupled-scaled",
+                label: "decoupled and scaled by the learning rate, θ −= α·λ·θ beside the Adam step",
+                accepted: isAdamW,
+                source: `${LOSHCHILOV}, Algorithm 2 with the decay multiplied by the learning rate (common practice)`,
+                meaning: isAdamW ? undefined : "that is AdamW's decoupled decay, not Adam with L2 regularisation",
+            },
+            {
+                key: "decoupled",
+                label: "decoupled and not scaled by the learning rate, θ −= λ·θ beside the Adam step",
+                accepted: isAdamW,
+                source: `${LOSHCHILOV}, Algorithm 2 with schedule multiplier ηₜ = 1`,
+                meaning: isAdamW ? undefined : "that is AdamW's decoupled decay, not Adam with L2 regularisation",
+            },
+        ],
+        exposedBy: ["flat", "bowl", "valley", "schedule", "faint"],
+        whenUnprobed: "not probed",
+    };
+}
+const AMSGRAD_MAX = {
+    key: "amsgradMax",
+    title: "AMSGrad maximum",
+    values: [
+        {
+            key: "raw",
+            label: "running maximum of the raw second moment v",
+            accepted: true,
+            source: REDDI,
+        },
+        {
+            key: "corrected",
+            label: "running maximum of the bias-corrected second moment v̂",
+            accepted: true,
+            source: "common practice",
+        },
+        {
+            key: "none",
+            label: "no running maximum",
+            accepted: false,
+            source: `${KINGMA_BA}, Algorithm 1`,
+            meaning: "that is plain Adam: the AMSGrad maximum is not used",
+        },
+    ],
+    exposedBy: ["amsgrad"],
+    whenUnprobed: "not probed: the optimizer has no setting for beta2, so the probe with β2 = 0.9 could not run",
+};
+/** Axis keys and value keys per method, for validating `expect` (independent of the claim). */
+const METHOD_AXES = {
+    sgd: [],
+    momentum: [MOMENTUM_FORM],
+    nesterov: [NESTEROV_FORM, NESTEROV_LR],
+    adagrad: [],
+    rmsprop: [RMSPROP_EPS],
+    adam: [ADAM_EPS, decayAxis("adam"), AMSGRAD_MAX],
+    adamw: [ADAM_EPS, decayAxis("adamw"), AMSGRAD_MAX],
+};
+/** Every combination of one value per axis, in axis order. */
+function combinations(axes) {
+    let out = [{}];
+    for (const axis of axes) {
+        const next = [];
+        for (const partial of out)
+            for (const value of axis.values)
+                next.push({ ...partial, [axis.key]: value });
+        out = next;
+    }
+    return out;
+}
+function axisVariants(axes, build) {
+    return combinations(axes).map((values) => {
+        const { factory, patch } = build(values);
+        const meanings = Object.values(values)
+            .map((v) => v.meaning)
+            .filter((m) => m !== undefined);
+        return {
+            label: axes.map((a) => `${a.title}: ${values[a.key].label}`).join("; ") || "the published rule",
+            factory,
+            patch,
+            lrScale: 1,
+            values: Object.fromEntries(Object.entries(values).map(([k, v]) => [k, v.key])),
+            accepted: Object.values(values).every((v) => v.accepted),
+            ...(meanings.length > 0 ? { meaning: meanings.join("; ") } : {}),
+        };
+    });
+}
+/**
+ * The catalogue of `method` for a claim (complete reference hyperparameters) and the reference names the
+ * optimizer under test lets the check set. Axes that cannot matter for this claim are left out: the
+ * AMSGrad maximum unless the claim uses AMSGrad, the weight decay unless it is settable or nonzero.
+ */
+function methodCatalogue(method, claim, settable) {
+    const gamma = typeof claim.momentum === "number" ? claim.momentum : 0;
+    switch (method) {
+        case "sgd":
+            return {
+                method,
+                title: "gradient descent (SGD)",
+                source: "Robbins & Monro (1951), A Stochastic Approximation Method, Ann. Math. Statist. 22(3):400–407",
+                factory: optimizers/* sgd */.D5,
+                axes: [],
+                variants: axisVariants([], () => ({ factory: optimizers/* sgd */.D5, patch: {} })),
+                firstStepHint: "the step x −= η·∇f(x) already differs: check the learning rate and how the gradient is used",
+                laterStepHint: "step 1 agrees, so something carried between steps differs (the learning rate or a hidden state)",
+            };
+        case "momentum":
+            return {
+                method,
+                title: "heavy-ball momentum",
+                source: `Polyak (1964), USSR Comput. Math. Math. Phys. 4(5):1–17, doi:10.1016/0041-5553(64)90137-5; ${SUTSKEVER}, eq. (1)–(2)`,
+                factory: optimizers/* momentum */.Pg,
+                axes: [MOMENTUM_FORM],
+                variants: [
+                    ...axisVariants([MOMENTUM_FORM], (v) => ({ factory: optimizers/* momentum */.Pg, patch: { form: v.form.key } })),
+                    {
+                        label: "Nesterov's accelerated gradient",
+                        factory: optimizers/* nesterov */.fX,
+                        patch: { form: "lookahead" },
+                        lrScale: 1,
+                        values: {},
+                        accepted: false,
+                        meaning: "they follow Nesterov's method instead: the gradient is taken at the look-ahead point w − γv",
+                    },
+                    {
+                        label: "dampened momentum",
+                        factory: optimizers/* momentum */.Pg,
+                        patch: { form: "lr-outside" },
+                        lrScale: 1 - gamma,
+                        values: {},
+                        accepted: false,
+                        meaning: "the velocity is dampened, b = γb + (1 − γ)g, which scales every step by 1 − γ",
+                    },
+                ],
+                firstStepHint: "the first step −η∇f(w₀) already differs (the velocity starts at zero): check the learning rate and the gradient",
+                laterStepHint: "step 1 agrees (the velocity starts at zero), so the gradient step is right and what carries over between steps differs: check the momentum coefficient and the velocity update",
+            };
+        case "nesterov":
+            return {
+                method,
+                title: "Nesterov's accelerated gradient",
+                source: `Nesterov (1983), Soviet Mathematics Doklady 27(2):372–376; ${SUTSKEVER}, eq. (3)–(4)`,
+                factory: optimizers/* nesterov */.fX,
+                axes: [NESTEROV_FORM, NESTEROV_LR],
+                variants: [
+                    ...axisVariants([NESTEROV_FORM, NESTEROV_LR], (v) => ({
+                        factory: v.lrPlacement.key === "lr-inside" ? optimizers/* nesterov */.fX : nesterovLrOutside,
+                        patch: { form: v.form.key },
+                    })),
+                    ...["lr-inside", "lr-outside"].map((form) => ({
+                        label: "heavy-ball momentum",
+                        factory: optimizers/* momentum */.Pg,
+                        patch: { form },
+                        lrScale: 1,
+                        values: {},
+                        accepted: false,
+                        meaning: "the gradient is taken at the current point, not at the look-ahead point w − γv (that is heavy ball)",
+                    })),
+                ],
+                firstStepHint: "the first step already differs (the velocity starts at zero): check the learning rate and the gradient",
+                laterStepHint: "step 1 agrees (the velocity starts at zero), so what carries over between steps differs: check the momentum coefficient, the velocity update and where the gradient is taken",
+            };
+        case "adagrad":
+            return {
+                method,
+                title: "Adagrad",
+                source: "Duchi, Hazan & Singer (2011), Adaptive Subgradient Methods for Online Learning and Stochastic Optimization, JMLR 12:2121–2159",
+                factory: optimizers/* adagrad */.bw,
+                axes: [],
+                variants: axisVariants([], () => ({ factory: optimizers/* adagrad */.bw, patch: {} })),
+                firstStepHint: "the first step η·g/(δ + |g|) already differs: check the learning rate, δ and the initial accumulator",
+                laterStepHint: "step 1 agrees, so the accumulation of squared gradients differs",
+            };
+        case "rmsprop":
+            return {
+                method,
+                title: "RMSProp",
+                source: "Graves (2013), arXiv:1308.0850, §4; Ruder (2016), arXiv:1609.04747, §4.5",
+                factory: optimizers/* rmsprop */.m0,
+                axes: [RMSPROP_EPS],
+                variants: axisVariants([RMSPROP_EPS], (v) => ({
+                    factory: optimizers/* rmsprop */.m0,
+                    patch: { epsPlacement: v.epsPlacement.key },
+                })),
+                firstStepHint: "the first step η·g/(√((1 − ρ)g²) + ε) already differs (no bias correction): check ρ, ε and the learning rate",
+                laterStepHint: "step 1 agrees, so the running mean of g² differs: check ρ and the update of the mean",
+            };
+        case "adam":
+        case "adamw": {
+            const isAdamW = method === "adamw";
+            const axes = [ADAM_EPS];
+            const lambda = typeof claim.weightDecay === "number" ? claim.weightDecay : 0;
+            if (settable.has("weightDecay") || lambda > 0)
+                axes.push(decayAxis(method));
+            if (claim.amsgrad === true)
+                axes.push(AMSGRAD_MAX);
+            return {
+                method,
+                title: isAdamW ? "AdamW" : "Adam",
+                source: isAdamW ? `${LOSHCHILOV}, Algorithm 2` : `${KINGMA_BA}, Algorithm 1`,
+                factory: isAdamW ? optimizers/* adamw */.dp : optimizers/* adam */.Ch,
+                axes,
+                variants: axisVariants(axes, (v) => {
+                    const decay = v.decay?.key ?? (isAdamW ? "decoupled-scaled" : "coupled");
+                    const ams = v.amsgradMax?.key;
+                    const patch = { epsPlacement: v.epsPlacement.key };
+                    if (ams !== undefined) {
+                        patch.amsgrad = ams !== "none";
+                        patch.amsgradMax = ams === "none" ? "raw" : ams;
+                    }
+                    if (decay === "coupled")
+                        return { factory: optimizers/* adam */.Ch, patch };
+                    return { factory: optimizers/* adamw */.dp, patch: { ...patch, decayScaledByLr: decay === "decoupled-scaled" } };
+                }),
+                firstStepHint: "the first step α·g/(|g| + ε) per coordinate already differs (Kingma & Ba 2015, Algorithm 1): check the bias correction, ε and the learning rate",
+                laterStepHint: "step 1 agrees, so the moment estimates of later steps differ: check β1, β2, the bias corrections and that the step counter advances once per step",
+            };
+        }
+        default:
+            throw new RangeError(`methodCatalogue: unknown method ${JSON.stringify(method)}`);
+    }
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/conformance.js
+/**
+ * Conformance to a published update rule: is the optimizer under test the method it claims to be, and
+ * which of the method's forms does it follow?
+ *
+ * The optimizer under test and every known form of the claimed method (./variants.ts) run the same
+ * probes (./probes.ts): same problem, same start, same hyperparameters, step by step. Each probe is a
+ * small deterministic problem, so the same point always gets the same gradient; the probes are chosen so
+ * that every convention shows (a learning-rate change for the momentum forms, a large ε for its
+ * placement, a zero loss gradient for the weight decay, a falling second moment for AMSGrad). At every
+ * step the iterates are compared norm-wise:
+ *
+ *   d_k = ‖c_k − r_k‖∞ / max(‖c_k‖∞, ‖r_k‖∞)          (relative)
+ *
+ * and a form *matches* when d_k ≤ tolerance at every step of every probe that ran. The default 1e−9 is far
+ * above the rounding differences of equivalent arithmetic in double precision (about 1e−15 per step; a
+ * few dozen steps are compared) and far below what a different rule produces on these probes (1e−6 and
+ * more); float32 code needs about 1e−5 (docs/decisions/0003-reference-checks.md).
+ *
+ * The outcome: "is it right" — some accepted form matches (and the `expect` pins hold) — and "which
+ * variant" — per convention axis, the values of the forms that match. When no accepted form matches, the
+ * message names the first step at which the closest accepted form departs, by how much, and why that is
+ * likely (a known mix-up that does match, or what a departure at that step and probe points to).
+ */
+
+
+
+
+
+
+/** Relative norm-wise difference of two iterates; 0 for bitwise-equal NaN coordinates, Infinity for one-sided non-finite. */
+function relativeDifference(a, b) {
+    let diff = 0;
+    let scale = 0;
+    for (let i = 0; i < a.length; i++) {
+        const x = a[i];
+        const y = b[i];
+        if (!Number.isFinite(x) || !Number.isFinite(y)) {
+            if (Object.is(x, y))
+                continue;
+            return Infinity;
+        }
+        diff = Math.max(diff, Math.abs(x - y));
+        scale = Math.max(scale, Math.abs(x), Math.abs(y));
+    }
+    if (diff === 0)
+        return 0;
+    return diff / scale;
+}
+/**
+ * The optimizer's name for each non-convention reference hyperparameter: the declared mapping, else the
+ * same name when the optimizer declares it (or when its names are unknown), else null.
+ */
+function resolveNames(method, declared, known) {
+    const factory = METHOD_FACTORIES[method];
+    const out = {};
+    for (const name of Object.keys(factory.hyperSpecs)) {
+        if (CONVENTION_KEYS.includes(name))
+            continue;
+        if (Object.prototype.hasOwnProperty.call(declared, name))
+            out[name] = declared[name];
+        else
+            out[name] = known === undefined || known.includes(name) ? name : null;
+    }
+    return out;
+}
+/** The complete claim: reference defaults, then the optimizer's own values (translated), then the declared claim. */
+function completeClaim(request, names) {
+    const factory = METHOD_FACTORIES[request.method];
+    const merged = {};
+    for (const [ref, own] of Object.entries(names)) {
+        if (own === null || !Object.prototype.hasOwnProperty.call(request.base, own))
+            continue;
+        const value = request.base[own];
+        const spec = factory.hyperSpecs[ref];
+        if ((spec.type === "number" && typeof value === "number") ||
+            (spec.type === "boolean" && typeof value === "boolean")) {
+            merged[ref] = value;
+        }
+    }
+    Object.assign(merged, request.claim);
+    return (0,optimizers/* resolveHyper */.Vn)(factory, merged, `${request.where}: the claimed hyperparameters`);
+}
+/** Reference hyperparameters of one probe: the claim with the probe's settings where they can be set. */
+function probeValues(claim, probe, settable) {
+    const out = { ...claim };
+    for (const [k, v] of Object.entries(probe.set))
+        if (settable.has(k))
+            out[k] = v;
+    return out;
+}
+function probeRequest(probe, hyper, lr) {
+    return {
+        definition: probe.definition,
+        params: {},
+        problemKey: probe.definition.name,
+        hyper,
+        steps: probe.steps,
+        suiteSeed: 0,
+        seedIndex: 0,
+        ...(probe.lrChange ? { lrChange: { after: probe.lrChange.after, lr: lr * probe.lrChange.factor } } : {}),
+    };
+}
+/** Collects copies of the iterates x₀ … x_n. */
+function collector() {
+    const iterates = [];
+    return { iterates, observe: (_k, x) => iterates.push(Float64Array.from(x)) };
+}
+/** The reference trajectory of `variant` on `probe`. */
+function referenceTrajectory(variant, values, probe) {
+    const specs = variant.factory.hyperSpecs;
+    const hyper = {};
+    for (const [k, v] of Object.entries(values))
+        if (Object.prototype.hasOwnProperty.call(specs, k))
+            hyper[k] = v;
+    Object.assign(hyper, variant.patch);
+    const lr = values.lr * variant.lrScale;
+    hyper.lr = lr;
+    const { iterates, observe } = collector();
+    const outcome = runInProcess(variant.factory, probeRequest(probe, hyper, lr), observe);
+    if (outcome.steps === 0 && outcome.error !== undefined) {
+        throw new Error(`conformance: the reference ${variant.factory.name} could not run probe ${probe.id}: ${outcome.error}`);
+    }
+    return iterates;
+}
+/** First step at which two trajectories differ by more than `tolerance`, and the largest difference. */
+function compare(candidate, reference, tolerance) {
+    let first = null;
+    let max = 0;
+    const n = Math.max(candidate.length, reference.length);
+    for (let k = 0; k < n; k++) {
+        const c = candidate[k];
+        const r = reference[k];
+        const d = c === undefined || r === undefined ? Infinity : relativeDifference(c, r);
+        if (d > max)
+            max = d;
+        if (first === null && !(d <= tolerance))
+            first = { step: k, relative: d };
+    }
+    return { first, max };
+}
+/** Orders forms from the closest to the farthest: more probes matched, later departure, smaller difference. */
+function closer(a, b) {
+    if (a.matched !== b.matched)
+        return b.matched - a.matched;
+    const sa = a.departure?.step ?? Infinity;
+    const sb = b.departure?.step ?? Infinity;
+    if (sa !== sb)
+        return sb - sa;
+    return (a.departure?.relative ?? 0) - (b.departure?.relative ?? 0);
+}
+/** What a departure confined to one special probe says about the code. */
+const PROBE_CONCLUSIONS = {
+    faint: "ε enters differently from every known form",
+    flat: "the weight decay is applied differently from every known form",
+    amsgrad: "the running maximum of the second moment is kept differently from every known form",
+};
+/** Differences this many times smaller than the largest one count as side effects of it. */
+const DOMINANCE = 1e3;
+/** Why the closest accepted form departs, as a clause. */
+function departureHint(catalogue, closest, results, ran) {
+    const impostor = results.find((r) => r.departure === null && !r.variant.accepted);
+    if (impostor !== undefined)
+        return impostor.variant.meaning ?? `they match ${impostor.variant.label}`;
+    const dep = closest.departure;
+    const failing = ran
+        .map((p) => closest.byProbe.get(p.id))
+        .filter((d) => d !== null && d !== undefined);
+    const dominant = failing.reduce((a, b) => (b.relative > a.relative ? b : a));
+    const others = failing.filter((d) => d !== dominant);
+    const alone = others.every((d) => d.relative * DOMINANCE <= dominant.relative);
+    const probe = dominant.probe;
+    if (alone) {
+        const where = others.length === 0
+            ? `only the probe "${probe.title}" departs`
+            : `the difference is largest on the probe "${probe.title}" (${format_short(dominant.relative)}, against at most ` +
+                `${format_short(Math.max(...others.map((d) => d.relative)))} elsewhere)`;
+        if (probe.id === "schedule" && probe.lrChange && dominant.step === probe.lrChange.after + 1) {
+            return `${where}, right after the learning-rate change, so the new learning rate is applied differently from the published rule: one step late, not at all, or to the accumulated velocity`;
+        }
+        const conclusion = PROBE_CONCLUSIONS[probe.id];
+        if (conclusion !== undefined)
+            return `${where}, so ${conclusion}`;
+    }
+    return dep.step <= 1 ? catalogue.firstStepHint : catalogue.laterStepHint;
+}
+/** Labels of an axis's values, quoted for a list. */
+function valueLabels(axis, keys) {
+    return keys.map((k) => axis.values.find((v) => v.key === k)?.label ?? k).join(" / ");
+}
+/**
+ * Runs the conformance check. Returns the overall result (id `conformance:OPTIMIZER`) followed by one
+ * informational result per convention axis (id `conformance:OPTIMIZER:AXIS`, never gating). Throws an
+ * `InputError` when the claimed hyperparameters are invalid for the reference optimizer.
+ */
+async function checkConformance(request) {
+    const { method, tolerance } = request;
+    const id = `conformance:${request.optimizer}`;
+    const names = resolveNames(method, request.names, request.source.hyperNames);
+    const settable = new Set(Object.keys(names).filter((k) => names[k] !== null));
+    const claim = completeClaim(request, names);
+    const catalogue = methodCatalogue(method, claim, settable);
+    const tol = { kind: "relative", value: tolerance };
+    const head = `${catalogue.title} conformance`;
+    const fail = (summary, extra = {}) => [
+        {
+            id,
+            status: "fail",
+            gating: request.gating,
+            summary,
+            source: catalogue.source,
+            tolerance: tol,
+            ...extra,
+        },
+    ];
+    // 1. The optimizer under test on every probe it can run.
+    const ran = [];
+    const skipped = [];
+    const candidate = new Map();
+    for (const probe of probesFor(method, claim)) {
+        const missing = probe.requires.filter((r) => !settable.has(r));
+        if (missing.length > 0) {
+            skipped.push(`${probe.id} (no setting for ${missing.join(", ")})`);
+            continue;
+        }
+        const values = probeValues(claim, probe, settable);
+        const hyper = { ...request.base };
+        for (const [ref, own] of Object.entries(names))
+            if (own !== null)
+                hyper[own] = values[ref];
+        const { iterates, observe } = collector();
+        const outcome = await request.source.run(probeRequest(probe, hyper, values.lr), observe);
+        if (outcome.lrChange === "unsupported") {
+            skipped.push(`${probe.id} (the optimizer cannot change its learning rate between steps)`);
+            continue;
+        }
+        if (outcome.error !== undefined) {
+            const hint = outcome.steps === 0 ? `; map or drop hyperparameter names with ${request.where}.names` : "";
+            return fail(`${head}: the optimizer failed on the probe "${probe.title}": ${outcome.error}${hint}`);
+        }
+        ran.push(probe);
+        candidate.set(probe.id, iterates);
+    }
+    if (ran.length === 0) {
+        return [
+            {
+                id,
+                status: "skipped",
+                gating: request.gating,
+                summary: `${head}: no probe could run (${skipped.join("; ")})`,
+                source: catalogue.source,
+            },
+        ];
+    }
+    // 2. Every known form on the same probes.
+    const results = [];
+    for (const variant of catalogue.variants) {
+        let departure = null;
+        let matched = 0;
+        let maxRelative = 0;
+        const byProbe = new Map();
+        for (const probe of ran) {
+            const reference = referenceTrajectory(variant, probeValues(claim, probe, settable), probe);
+            const { first, max } = compare(candidate.get(probe.id), reference, tolerance);
+            maxRelative = Math.max(maxRelative, max);
+            const dep = first === null ? null : { probe, step: first.step, relative: first.relative };
+            byProbe.set(probe.id, dep);
+            if (dep === null)
+                matched++;
+            else if (departure === null ||
+                dep.step < departure.step ||
+                (dep.step === departure.step && dep.relative > departure.relative)) {
+                departure = dep;
+            }
+        }
+        results.push({ variant, departure, matched, maxRelative, byProbe });
+    }
+    // 3. Which values of each axis are consistent with the iterates.
+    const matching = results.filter((r) => r.departure === null);
+    const axisResults = catalogue.axes.map((axis) => axisOutcome(axis, matching, ran, request, catalogue));
+    const probeList = `${ran.length} probe${ran.length === 1 ? "" : "s"} (${ran.map((p) => p.id).join(", ")})`;
+    const notRun = skipped.length > 0 ? `; not run: ${skipped.join("; ")}` : "";
+    const acceptedMatches = matching.filter((r) => r.variant.accepted);
+    if (acceptedMatches.length > 0) {
+        const violated = pinViolations(catalogue, request.expect, acceptedMatches);
+        const best = acceptedMatches.reduce((a, b) => (b.maxRelative < a.maxRelative ? b : a));
+        if (violated.length > 0) {
+            return [
+                ...fail(`${head}: ${violated.join("; ")}`, { measured: best.maxRelative, expected: 0 }),
+                ...axisResults,
+            ];
+        }
+        const conventions = catalogue.axes.map((axis) => {
+            const keys = [...new Set(acceptedMatches.map((r) => r.variant.values[axis.key]))];
+            return keys.length === 1
+                ? `${axis.title}: ${valueLabels(axis, keys)}`
+                : `${axis.title}: indistinguishable`;
+        });
+        const which = conventions.length > 0 ? `; ${conventions.join("; ")}` : "";
+        return [
+            {
+                id,
+                status: "pass",
+                gating: request.gating,
+                summary: `${head}: matches the published rule step for step on ${probeList} within ${format_short(tolerance)} (relative)${which}${notRun}`,
+                source: catalogue.source,
+                measured: best.maxRelative,
+                expected: 0,
+                tolerance: tol,
+            },
+            ...axisResults,
+        ];
+    }
+    const accepted = results.filter((r) => r.variant.accepted).sort(closer);
+    const closest = accepted[0];
+    const dep = closest.departure;
+    const hint = departureHint(catalogue, closest, results, ran);
+    const summary = `${head}: from step ${dep.step} the iterates differ from the published rule by ${format_short(dep.relative)} ` +
+        `(relative, probe "${dep.probe.title}"); ${hint}${notRun}`;
+    return [...fail(summary, { measured: dep.relative, expected: 0 }), ...axisResults];
+}
+/** Sentences for every `expect` pin that no matching accepted form satisfies. */
+function pinViolations(catalogue, expect, acceptedMatches) {
+    const out = [];
+    for (const [axisKey, want] of Object.entries(expect)) {
+        const axis = catalogue.axes.find((a) => a.key === axisKey);
+        if (axis === undefined)
+            continue; // an axis that cannot matter for this claim (e.g. AMSGrad off)
+        const found = [...new Set(acceptedMatches.map((r) => r.variant.values[axisKey]))];
+        if (found.includes(want))
+            continue;
+        out.push(`the code follows ${axis.title}: ${valueLabels(axis, found)}, but the declaration expects ${valueLabels(axis, [want])}`);
+    }
+    return out;
+}
+/** The informational result of one convention axis. */
+function axisOutcome(axis, matching, ran, request, catalogue) {
+    const id = `conformance:${request.optimizer}:${axis.key}`;
+    const base = { id, gating: false, source: catalogue.source };
+    const withValue = matching.filter((r) => r.variant.values[axis.key] !== undefined);
+    const keys = [...new Set(withValue.map((r) => r.variant.values[axis.key]))];
+    const title = `${catalogue.title} ${axis.title}`;
+    if (keys.length === 0) {
+        return {
+            ...base,
+            status: "skipped",
+            summary: `${title}: not determined, no known form matches the iterates`,
+        };
+    }
+    if (keys.length > 1) {
+        const exposed = ran.some((p) => axis.exposedBy.includes(p.id));
+        const why = exposed ? `the probes could not tell ${valueLabels(axis, keys)} apart` : axis.whenUnprobed;
+        return { ...base, status: "skipped", summary: `${title}: ${why}` };
+    }
+    const value = axis.values.find((v) => v.key === keys[0]);
+    const want = request.expect[axis.key];
+    if (!value.accepted) {
+        return {
+            ...base,
+            status: "fail",
+            summary: `${title}: ${value.label}; ${value.meaning ?? "not a form of this method"}`,
+            source: value.source,
+        };
+    }
+    if (want !== undefined && want !== value.key) {
+        return {
+            ...base,
+            status: "fail",
+            summary: `${title}: ${value.label}; the declaration expects ${valueLabels(axis, [want])}`,
+            source: value.source,
+        };
+    }
+    return { ...base, status: "pass", summary: `${title}: ${value.label}`, source: value.source };
+}
+/**
+ * Throws an `InputError` unless `expect` names conventions of `method` and forms of the method for them
+ * (see METHOD_AXES; a known mix-up such as AMSGrad without its maximum cannot be expected).
+ */
+function checkExpect(method, expect, axes, where) {
+    for (const [key, value] of Object.entries(expect)) {
+        const axis = axes.find((a) => a.key === key);
+        if (axis === undefined) {
+            const known = axes.map((a) => a.key).join(", ") || "none";
+            throw new core_errors/* InputError */.d(`${where}.expect.${key} is not a convention of ${method} (known: ${known})`);
+        }
+        const forms = axis.values.filter((v) => v.accepted).map((v) => v.key);
+        if (!forms.includes(value)) {
+            throw new core_errors/* InputError */.d(`${where}.expect.${key} must be one of ${forms.map((v) => JSON.stringify(v)).join(", ")}, got ${JSON.stringify(value)}`);
+        }
+    }
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/fit-rate.js
+/**
+ * Fitted asymptotic rate of a run on a quadratic — what the rate check compares with the spectral radius.
+ *
+ * The gap g_k = f(x_k) − f* of a linear method behaves asymptotically like C·k^m·ρ^(2k): m = 0 when the
+ * blocks attaining ρ are diagonalisable, m = 2 when one has a double root (the error then behaves like
+ * k·ρᵏ, the "optimal" parameters of heavy ball and Nesterov do this). So ln g_k − m·ln k is linear in
+ * k with slope 2·ln ρ, and ρ = exp(slope/2) is the per-step contraction of the error.
+ *
+ * Window: from the first step whose gap is at most `upper`·g₀ (past the start-up transient, where the
+ * slower-than-dominant components have not yet died out) to the step before the gap first drops below
+ * `lower`·g₀ (before rounding noise of the iterates, about 1e-16 relative, dominates). When the dominant
+ * roots are complex the gap oscillates (it can come close to zero at single steps), so the window is cut
+ * into blocks of at least half an oscillation period and the fit goes through the largest value of each
+ * block — the envelope — by least squares. Without oscillation the blocks are single steps.
+ *
+ * Source: the asymptotic forms are those of ./linear-rate.ts (derived there); the envelope fit is our
+ * own choice. Cost: O(window length).
+ */
+const DEFAULT_FIT = { logPower: 0, block: 1, upper: 1e-3, lower: 1e-16 };
+/** Fewest blocks a fit goes through; the block is shortened when the window is short. */
+const MIN_BLOCKS = 8;
+/**
+ * Fits ρ to the gaps g_0 … g_n of one run (index = step). Returns the fit, or the reason none was
+ * possible (the gap never got below upper·g₀, or the window is shorter than 8 steps).
+ */
+function fitRate(gaps, options = {}) {
+    const { logPower, upper, lower } = { ...DEFAULT_FIT, ...options };
+    const n = gaps.length - 1;
+    const g0 = gaps[0];
+    if (!(g0 > 0) || !Number.isFinite(g0))
+        return { rho: null, why: `the initial gap is ${g0}, not a positive number` };
+    let from = -1;
+    for (let k = 1; k <= n; k++) {
+        const g = gaps[k];
+        if (!Number.isFinite(g))
+            return { rho: null, why: `the gap is not finite at step ${k}` };
+        if (g <= upper * g0) {
+            from = k;
+            break;
+        }
+    }
+    if (from < 0) {
+        return { rho: null, why: `the gap never fell to ${upper} of the initial gap in ${n} steps` };
+    }
+    let to = n;
+    for (let k = from + 1; k <= n; k++) {
+        const g = gaps[k];
+        if (!Number.isFinite(g) || !(g >= lower * g0)) {
+            to = k - 1;
+            break;
+        }
+    }
+    const length = to - from + 1;
+    if (length < MIN_BLOCKS) {
+        return { rho: null, why: `only ${length} steps lie between ${upper} and ${lower} of the initial gap` };
+    }
+    const block = Math.max(1, Math.min(Math.floor(options.block ?? 1), Math.floor(length / MIN_BLOCKS)));
+    let count = 0;
+    let sx = 0;
+    let sy = 0;
+    let sxx = 0;
+    let sxy = 0;
+    for (let start = from; start + block - 1 <= to; start += block) {
+        let bestK = -1;
+        let bestY = -Infinity;
+        for (let k = start; k < start + block; k++) {
+            const g = gaps[k];
+            if (!(g > 0))
+                continue;
+            const y = Math.log(g) - logPower * Math.log(k);
+            if (y > bestY) {
+                bestY = y;
+                bestK = k;
+            }
+        }
+        if (bestK < 0)
+            continue;
+        count++;
+        sx += bestK;
+        sy += bestY;
+        sxx += bestK * bestK;
+        sxy += bestK * bestY;
+    }
+    const den = count * sxx - sx * sx;
+    if (count < 3 || !(den > 0))
+        return { rho: null, why: `too few positive gaps in the window [${from}, ${to}]` };
+    const slope = (count * sxy - sx * sy) / den;
+    return { rho: Math.exp(slope / 2), from, to, points: count, block };
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/linear-rate.js
+/**
+ * Asymptotic convergence rates of the linear first-order methods on a quadratic — the theory the rate
+ * check compares a run with.
+ *
+ * On f(x) = ½ (x − x*)ᵀ A (x − x*) with eigenvalues λ of A, gradient descent, heavy ball and Nesterov's
+ * method are linear iterations in the error e = x − x*. In the eigenbasis they decouple into one 2×2
+ * block per eigenvalue acting on (e_k, e_{k−1}):
+ *
+ *   heavy ball (step α, momentum β):  [[1 + β − αλ, −β], [1, 0]]
+ *   Nesterov (step α, momentum β):    [[(1 + β)(1 − αλ), −β(1 − αλ)], [1, 0]]
+ *   gradient descent:                  heavy ball with β = 0 (roots 1 − αλ and 0)
+ *
+ * A block [[a, b], [1, 0]] has the characteristic polynomial z² − a·z − b, so its eigenvalues are the
+ * roots of z² − t·z + d with t = a, d = −b: real when t² ≥ 4d, else a complex pair of modulus √d. The
+ * asymptotic rate of the error is the spectral radius ρ = max over the eigenvalues of the largest root
+ * modulus; the gap f − f* contracts like ρ² per step. When the largest root of a block is double (t² = 4d,
+ * which the tuned parameters below produce) the block is not diagonalisable and the error behaves like
+ * k·ρᵏ instead of ρᵏ, so the gap behaves like k²·ρ^(2k): the fit in ./fit-rate.ts corrects for that.
+ *
+ * Sources: the blocks are the standard companion form of the three-term recursions (derived here);
+ * the tuned closed forms are in `tunedParameters` with their sources. Cost: O(number of eigenvalues).
+ */
+const LINEAR_METHODS = (/* unused pure expression or super */ null && (["gradient-descent", "heavy-ball", "nesterov"]));
+/** Relative distance of two roots below which they count as double (see `BlockRoots.double`). */
+const DOUBLE_ROOT_TOLERANCE = 1e-6;
+/**
+ * Roots of z² − t·z + d = 0 (the eigenvalues of the block [[t, −d], [1, 0]]). The larger real root is
+ * computed without cancellation as (t + sign(t)·√(t² − 4d))/2 and the other as d divided by it.
+ */
+function quadraticRoots(t, d) {
+    const disc = t * t - 4 * d;
+    if (disc < 0) {
+        const modulus = Math.sqrt(d);
+        const gap = Math.sqrt(-disc); // |z₁ − z₂|
+        return {
+            modulus,
+            complex: true,
+            double: gap <= DOUBLE_ROOT_TOLERANCE * modulus,
+            angle: Math.atan2(Math.sqrt(-disc) / 2, t / 2),
+        };
+    }
+    const s = Math.sqrt(disc);
+    const r1 = t >= 0 ? (t + s) / 2 : (t - s) / 2;
+    const r2 = r1 === 0 ? 0 : d / r1;
+    const modulus = Math.max(Math.abs(r1), Math.abs(r2));
+    return {
+        modulus,
+        complex: false,
+        double: Math.abs(r1 - r2) <= DOUBLE_ROOT_TOLERANCE * modulus,
+        angle: Math.abs(r1) >= Math.abs(r2) ? (r1 < 0 ? Math.PI : 0) : r2 < 0 ? Math.PI : 0,
+    };
+}
+/** The roots of the iteration block of `method` for one eigenvalue λ. */
+function blockRoots(method, lr, momentum, lambda) {
+    const beta = method === "gradient-descent" ? 0 : momentum;
+    if (method === "nesterov") {
+        const q = 1 - lr * lambda;
+        return quadraticRoots((1 + beta) * q, beta * q);
+    }
+    return quadraticRoots(1 + beta - lr * lambda, beta);
+}
+/** Blocks within this relative distance of ρ count as attaining it. */
+const DOMINANT = 1e-9;
+/**
+ * Spectral radius of `method` with step `lr` and momentum `momentum` (ignored by gradient descent) over
+ * the given eigenvalues. Throws a RangeError for an empty spectrum or non-finite parameters.
+ */
+function linearRate(method, lr, momentum, eigenvalues) {
+    if (eigenvalues.length === 0)
+        throw new RangeError("linearRate: the spectrum is empty");
+    if (!Number.isFinite(lr) || !Number.isFinite(momentum)) {
+        throw new RangeError(`linearRate: lr and momentum must be finite, got ${lr} and ${momentum}`);
+    }
+    const roots = [];
+    let rho = 0;
+    for (let i = 0; i < eigenvalues.length; i++) {
+        const r = blockRoots(method, lr, momentum, eigenvalues[i]);
+        roots.push(r);
+        if (r.modulus > rho)
+            rho = r.modulus;
+    }
+    let lambda = NaN;
+    let double = false;
+    let slowestAngle = null;
+    for (let i = 0; i < roots.length; i++) {
+        const r = roots[i];
+        if (r.modulus < rho * (1 - DOMINANT))
+            continue;
+        if (Number.isNaN(lambda) || eigenvalues[i] < lambda)
+            lambda = eigenvalues[i];
+        if (r.double)
+            double = true;
+        if (r.complex && !r.double && r.angle > 0 && (slowestAngle === null || r.angle < slowestAngle)) {
+            slowestAngle = r.angle;
+        }
+    }
+    return { rho, lambda, double, slowestAngle };
+}
+const NESTEROV_2004 = "Nesterov (2004), Introductory Lectures on Convex Optimization: A Basic Course, Kluwer (book)";
+const POLYAK_1964 = "Polyak (1964), Some methods of speeding up the convergence of iteration methods, USSR Comput. Math. Math. Phys. 4(5):1–17, doi:10.1016/0041-5553(64)90137-5";
+/**
+ * The classical tuned parameters and their rates, κ = L/μ:
+ * - gradient descent, step 2/(L + μ): ρ = (κ − 1)/(κ + 1) (Nesterov 2004, Theorem 2.1.15);
+ * - heavy ball, α = 4/(√L + √μ)², β = ((√κ − 1)/(√κ + 1))²: ρ = (√κ − 1)/(√κ + 1) (Polyak 1964);
+ * - Nesterov, α = 1/L, β = (√L − √μ)/(√L + √μ): ρ = 1 − 1/√κ (Nesterov 2004, §2.2, constant step scheme).
+ * On a quadratic each rate equals the spectral radius of `linearRate` with these parameters exactly
+ * (the tests check that). Throws a RangeError unless 0 < μ ≤ L.
+ */
+function tunedParameters(method, mu, L) {
+    if (!(mu > 0 && L >= mu && Number.isFinite(L))) {
+        throw new RangeError(`tunedParameters: need 0 < μ ≤ L, got μ = ${mu}, L = ${L}`);
+    }
+    const sL = Math.sqrt(L);
+    const sMu = Math.sqrt(mu);
+    switch (method) {
+        case "gradient-descent":
+            return {
+                lr: 2 / (L + mu),
+                momentum: 0,
+                rate: (L - mu) / (L + mu),
+                source: `${NESTEROV_2004}, Theorem 2.1.15`,
+            };
+        case "heavy-ball": {
+            const r = (sL - sMu) / (sL + sMu);
+            return {
+                lr: 4 / ((sL + sMu) * (sL + sMu)),
+                momentum: r * r,
+                rate: r,
+                source: POLYAK_1964,
+            };
+        }
+        case "nesterov":
+            return {
+                lr: 1 / L,
+                momentum: (sL - sMu) / (sL + sMu),
+                rate: 1 - sMu / sL,
+                source: `${NESTEROV_2004}, §2.2 (constant step scheme)`,
+            };
+    }
+}
+/**
+ * The gap sequence the linear theory predicts: each eigen-component of the initial error c_i evolves by
+ * its 2×2 block, starting with e₁ = (1 − αλ)·e₀ (the velocity starts at zero in every form), and the gap
+ * is ½·Σ λᵢ·eᵢ². `point` "lookahead" measures Nesterov's gap at y_k = w_k + β(w_k − w_{k−1}) (y₀ = w₀),
+ * the point the stored-look-ahead form keeps as its parameters; heavy ball and gradient descent have
+ * one point only. Writes g_0 … g_steps into `out` (length steps + 1); allocates nothing else.
+ * Cost O(n·steps).
+ */
+function modelGaps(method, lr, momentum, eigenvalues, c0, out, point = "iterate") {
+    const n = eigenvalues.length;
+    const beta = method === "gradient-descent" ? 0 : momentum;
+    const ahead = method === "nesterov" && point === "lookahead";
+    out.fill(0);
+    const steps = out.length - 1;
+    for (let i = 0; i < n; i++) {
+        const lambda = eigenvalues[i];
+        const h = 0.5 * lambda;
+        const q = 1 - lr * lambda;
+        let prev = c0[i];
+        let cur = q * prev;
+        out[0] += h * prev * prev;
+        if (steps >= 1) {
+            const y = ahead ? (1 + beta) * cur - beta * prev : cur;
+            out[1] += h * y * y;
+        }
+        for (let k = 2; k <= steps; k++) {
+            const next = method === "nesterov"
+                ? q * ((1 + beta) * cur - beta * prev)
+                : (1 + beta - lr * lambda) * cur - beta * prev;
+            prev = cur;
+            cur = next;
+            const y = ahead ? (1 + beta) * cur - beta * prev : cur;
+            out[k] += h * y * y;
+        }
+    }
+    return out;
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/spectrum.js
+/**
+ * What the rate and stationary-variance checks need to know about a quadratic problem instance: its
+ * eigenvalues, the eigenvectors (rotation) and the minimiser, and for the noisy quadratic the noise level.
+ * Read from the instance's own fields (src/problems/quadratic.ts, src/problems/noisy-quadratic.ts), so
+ * any problem exposing the same fields qualifies.
+ */
+
+/** An instance of the problem with dummy noise, for reading its structure (never for a run). */
+function probeInstance(definition, params) {
+    return definition.create(params, { noise: new core_rng/* Pcg32 */._8(0n, 0n) });
+}
+/** The facts of a quadratic instance, or null when the instance does not expose its eigenvalues. */
+function quadraticFacts(instance) {
+    const fields = instance;
+    const eigenvalues = fields.eigenvalues;
+    if (!(eigenvalues instanceof Float64Array) || eigenvalues.length !== instance.dim)
+        return null;
+    if (instance.xStar === null)
+        return null;
+    const rotation = fields.rotation instanceof Float64Array ? fields.rotation : null;
+    const sigma = typeof fields.sigma === "number" ? fields.sigma : 0;
+    return { instance, eigenvalues, rotation, xStar: instance.xStar, sigma };
+}
+/** Coordinates of x − x* in the eigenbasis: c = Q·(x − x*). */
+function eigenCoordinates(facts, x) {
+    const n = x.length;
+    const out = new Float64Array(n);
+    const q = facts.rotation;
+    for (let i = 0; i < n; i++) {
+        if (q === null) {
+            out[i] = x[i] - facts.xStar[i];
+            continue;
+        }
+        let s = 0;
+        for (let j = 0; j < n; j++)
+            s += q[i * n + j] * (x[j] - facts.xStar[j]);
+        out[i] = s;
+    }
+    return out;
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/rate-check.js
+/**
+ * Theoretical rate on a quadratic: does the optimizer under test converge at the rate its method has?
+ *
+ * Theory (./linear-rate.ts): for gradient descent, heavy ball and Nesterov with step α and momentum β,
+ * the error contracts asymptotically by ρ per step, ρ the spectral radius of the iteration matrix over
+ * the problem's eigenvalues; with the classical tuned parameters ρ has a closed form (Nesterov 2004,
+ * Theorem 2.1.15 and §2.2; Polyak 1964), which the check confirms equals the spectral radius.
+ *
+ * Measurement: one run of the optimizer under test from the suite's start point of seed 0, its gap
+ * f − f* at every step, and ρ fitted over a long window (./fit-rate.ts: from 1e−3 to 1e−16 of the initial
+ * gap, corrected for the k·ρᵏ behaviour of double roots, through the envelope when the error oscillates).
+ *
+ * Comparison: over a finite window, slower eigen-components that have not yet died out bias any fitted
+ * rate (by up to several percent on clustered spectra). So the same fit is applied to the gap sequence
+ * the linear theory itself predicts from the same start (`modelGaps`; for Nesterov both at w_k and at
+ * the look-ahead point, whichever the code keeps), and the run must match that within `tolerance` of
+ * the convergence speed −ln ρ: |ρ̂_run/ρ̂_theory − 1| ≤ tolerance·|ln ρ|. A correct implementation
+ * matches to about 1e−10 (docs/decisions/0003-reference-checks.md); a wrong momentum coefficient, a
+ * dropped look-ahead or a wrong step scaling changes −ln ρ by several percent or more.
+ */
+
+
+
+
+
+const METHOD_NAMES = {
+    "gradient-descent": "gradient descent",
+    "heavy-ball": "heavy ball",
+    nesterov: "Nesterov",
+};
+const BLOCKS = {
+    "gradient-descent": "1 − αλ",
+    "heavy-ball": "[[1 + β − αλ, −β], [1, 0]]",
+    nesterov: "[[(1 + β)(1 − αλ), −β(1 − αλ)], [1, 0]]",
+};
+/** Window of the fit, relative to the initial gap (see ./fit-rate.ts). */
+const UPPER = 1e-3;
+const LOWER = 1e-16;
+/**
+ * Reads a number hyperparameter of the case; throws an InputError naming the declaration otherwise.
+ * `tunable`: the declaration could use `tuned: true` instead (rate checks).
+ */
+function numberHyper(spec, name, where, role, tunable = false) {
+    const value = spec.hyper[name];
+    if (typeof value !== "number" || !Number.isFinite(value)) {
+        throw new core_errors/* InputError */.d(`${where}: case ${spec.id} has no number hyperparameter ${(0,core_errors/* quote */.h)(name)} for the ${role} (got ${(0,core_errors/* quote */.h)(value)}); ` +
+            `name it in names.${role === "step size" ? "lr" : "momentum"}${tunable ? " or set tuned: true" : ""}`);
+    }
+    return value;
+}
+/** Runs the rate check on one case. */
+async function checkRate(request) {
+    const { spec, method } = request;
+    const id = `rate:${method}`;
+    const instance = probeInstance(request.definition, spec.params);
+    const facts = quadraticFacts(instance);
+    if (facts === null || instance.stochastic) {
+        throw new core_errors/* InputError */.d(`${request.where}: problem ${spec.problemKey} has no exposed eigenvalues (rate checks need quadratic)`);
+    }
+    const eig = facts.eigenvalues;
+    let mu = Infinity;
+    let L = -Infinity;
+    for (const l of eig) {
+        mu = Math.min(mu, l);
+        L = Math.max(L, l);
+    }
+    let lr;
+    let momentum;
+    let sourceText = `spectral radius of the ${METHOD_NAMES[method]} iteration, block ${BLOCKS[method]} per eigenvalue λ (derived here; ${method === "nesterov" ? NESTEROV_2004 + ", §2.2" : method === "heavy-ball" ? POLYAK_1964 : NESTEROV_2004 + ", §2.1"})`;
+    let closedForm = null;
+    if (request.tuned) {
+        const t = tunedParameters(method, mu, L);
+        lr = t.lr;
+        momentum = t.momentum;
+        closedForm = t.rate;
+        sourceText = `${t.source}; ${sourceText}`;
+    }
+    else {
+        lr = numberHyper(spec, request.names.lr, request.where, "step size");
+        momentum =
+            method === "gradient-descent"
+                ? 0
+                : numberHyper(spec, request.names.momentum, request.where, "momentum");
+    }
+    const theory = linearRate(method, lr, momentum, eig);
+    const rho = theory.rho;
+    const params = method === "gradient-descent" ? `α = ${fmt(lr)}` : `α = ${fmt(lr)}, β = ${fmt(momentum)}`;
+    const head = `rate (${METHOD_NAMES[method]}${request.tuned ? ", tuned" : ""}, ${params}, μ = ${fmt(mu)}, L = ${fmt(L)})`;
+    // At the tuned parameters the dominant roots are double, where a discriminant of rounding size (1e−16)
+    // moves the computed root by its square root: agreement to 1e−7 (relative) is all double precision gives.
+    if (closedForm !== null && !(Math.abs(closedForm - rho) <= 1e-7 * closedForm)) {
+        throw new Error(`${head}: closed form ${closedForm} and spectral radius ${rho} disagree; this is a bug in gradgate`);
+    }
+    const base = { id, gating: request.gating, source: sourceText };
+    if (!(rho < 1)) {
+        return {
+            ...base,
+            status: "skipped",
+            summary: `${head}: the iteration does not contract (ρ = ${fmt(rho)} ≥ 1), so there is no rate to check`,
+        };
+    }
+    const lnRho = Math.log(rho);
+    const needed = Math.ceil((1.5 * Math.log(LOWER)) / (2 * lnRho)) + 100;
+    if (needed > request.maxSteps) {
+        return {
+            ...base,
+            status: "skipped",
+            summary: `${head}: ρ = ${fmt(rho)} needs about ${needed} steps to fall to ${LOWER} of the initial gap, more than steps = ${request.maxSteps}`,
+        };
+    }
+    const hyper = { ...spec.hyper };
+    if (request.tuned) {
+        hyper[request.names.lr] = lr;
+        if (method !== "gradient-descent")
+            hyper[request.names.momentum] = momentum;
+    }
+    const gaps = new Float64Array(needed + 1).fill(NaN);
+    let x0 = null;
+    const fStar = instance.fStar;
+    const outcome = await request.source.run({
+        definition: request.definition,
+        params: spec.params,
+        problemKey: spec.problemKey,
+        hyper,
+        steps: needed,
+        suiteSeed: request.suiteSeed,
+        seedIndex: 0,
+    }, (k, x) => {
+        if (k === 0)
+            x0 = Float64Array.from(x);
+        gaps[k] = instance.objective(x) - fStar;
+    });
+    if (outcome.error !== undefined || x0 === null) {
+        return {
+            ...base,
+            status: "fail",
+            summary: `${head}: the run failed: ${outcome.error ?? "no start point was observed"}`,
+        };
+    }
+    const fitOptions = {
+        logPower: theory.double ? 2 : 0,
+        block: theory.slowestAngle === null ? 1 : Math.ceil(Math.PI / theory.slowestAngle),
+        upper: UPPER,
+        lower: LOWER,
+    };
+    const run = fitRate(gaps, fitOptions);
+    if (run.rho === null) {
+        return {
+            ...base,
+            status: "fail",
+            summary: `${head}: no rate could be fitted: ${run.why}, although the theory's ρ = ${fmt(rho)} reaches ${LOWER} of the initial gap in about ${Math.ceil(Math.log(LOWER) / (2 * lnRho))} steps`,
+            expected: rho,
+        };
+    }
+    const c0 = eigenCoordinates(facts, x0);
+    const points = method === "nesterov" ? ["iterate", "lookahead"] : ["iterate"];
+    let best = null;
+    for (const point of points) {
+        const model = fitRate(modelGaps(method, lr, momentum, eig, c0, new Float64Array(needed + 1), point), fitOptions);
+        if (model.rho === null)
+            continue;
+        if (best === null || Math.abs(run.rho / model.rho - 1) < Math.abs(run.rho / best.rho - 1)) {
+            best = { rho: model.rho, point };
+        }
+    }
+    if (best === null)
+        throw new Error(`${head}: the theory's own gap sequence could not be fitted; this is a bug in gradgate`);
+    const allowed = request.tolerance * Math.abs(lnRho);
+    const relative = Math.abs(run.rho / best.rho - 1);
+    const speedRatio = Math.log(run.rho) / Math.log(best.rho);
+    const closed = closedForm === null ? "" : ` = ${closedFormText(method)}`;
+    const theoryText = `spectral radius ρ = ${fmt(rho)}${closed}` +
+        (fmt(best.rho) !== fmt(rho)
+            ? `; ${fmt(best.rho)} over this window, where slower components have not died out`
+            : "");
+    const window = `steps ${run.from}–${run.to}`;
+    const tolerance = { kind: "relative", value: allowed };
+    if (relative <= allowed) {
+        return {
+            ...base,
+            status: "pass",
+            summary: `${head}: the run contracts by ρ = ${fmt(run.rho)} per step over ${window}, as the theory predicts (${theoryText}); tolerance ${pct(request.tolerance)} of the convergence speed −ln ρ`,
+            measured: run.rho,
+            expected: best.rho,
+            tolerance,
+        };
+    }
+    const direction = speedRatio < 1 ? "slower" : "faster";
+    return {
+        ...base,
+        status: "fail",
+        summary: `${head}: the run contracts by ρ = ${fmt(run.rho)} per step over ${window}, the theory predicts ${fmt(best.rho)} (${theoryText}): ` +
+            `${pct(Math.abs(1 - speedRatio))} ${direction} convergence (−ln ρ ${fmt(-Math.log(run.rho))} vs ${fmt(-Math.log(best.rho))}), tolerance ${pct(request.tolerance)}`,
+        measured: run.rho,
+        expected: best.rho,
+        tolerance,
+    };
+}
+function closedFormText(method) {
+    switch (method) {
+        case "gradient-descent":
+            return "(κ − 1)/(κ + 1)";
+        case "heavy-ball":
+            return "(√κ − 1)/(√κ + 1)";
+        case "nesterov":
+            return "1 − 1/√κ";
+    }
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/config.js
+/**
+ * The `checks` section of a suite config: validated against its JSON Schema fragment (the single home of
+ * its defaults, `checksSchema` in src/config/schema.ts) and bound to the resolved suite — every
+ * declaration to the cases it applies to — with one clear message per mistake naming the field, the bad
+ * value and the expected form.
+ */
+
+
+
+
+
+
+
+
+
+let config_validator = null;
+function config_compile() {
+    if (config_validator === null) {
+        // verbose: errors carry their schema, so a message can list the known fields
+        const ajv = new _2020.Ajv2020({
+            allErrors: true,
+            verbose: true,
+            useDefaults: true,
+            strict: true,
+            allowUnionTypes: true,
+        });
+        // Wrapped, because ajv applies defaults to properties only (not to the schema root).
+        config_validator = ajv.compile({ type: "object", properties: { checks: checksSchema } });
+    }
+    return config_validator;
+}
+/** "/checks/rate/0/method" → ".rate[0].method". */
+function pathOf(pointer) {
+    return pointer
+        .split("/")
+        .slice(2)
+        .map((p) => (/^\d+$/.test(p) ? `[${p}]` : `.${p}`))
+        .join("");
+}
+function config_describe(errors, data, where) {
+    const lines = [];
+    const seen = new Set();
+    for (const e of errors) {
+        const path = pathOf(e.instancePath);
+        const field = `${where}${path}`;
+        const p = e.params;
+        let value = data;
+        for (const part of e.instancePath.split("/").slice(1))
+            value = value?.[part];
+        let line;
+        switch (e.keyword) {
+            case "additionalProperties": {
+                const known = Object.keys(e.parentSchema?.properties ?? {}).join(", ");
+                line = `${field}.${String(p.additionalProperty)} is not a known field (known: ${known})`;
+                break;
+            }
+            case "required":
+                line = `${field}.${String(p.missingProperty)} is required`;
+                break;
+            case "enum":
+                line = `${field} must be one of ${p.allowedValues.map((v) => JSON.stringify(v)).join(", ")}, got ${(0,core_errors/* quote */.h)(value)}`;
+                break;
+            case "type":
+                line = `${field} must be ${[p.type]
+                    .flat()
+                    .map((t) => (t === "null" ? "null" : /^[aeiou]/.test(String(t)) ? `an ${t}` : `a ${t}`))
+                    .join(" or ")}, got ${(0,core_errors/* quote */.h)(value)}`;
+                break;
+            case "minimum":
+            case "maximum":
+            case "exclusiveMinimum":
+            case "exclusiveMaximum": {
+                const op = { minimum: "≥", maximum: "≤", exclusiveMinimum: ">", exclusiveMaximum: "<" }[e.keyword];
+                line = `${field} must be ${op} ${String(p.limit)}, got ${(0,core_errors/* quote */.h)(value)}`;
+                break;
+            }
+            default:
+                line = `${field} ${e.message ?? "is invalid"}, got ${(0,core_errors/* quote */.h)(value)}`;
+        }
+        const key = `${path}|${e.keyword}`;
+        if (seen.has(key))
+            continue;
+        seen.add(key);
+        lines.push(line);
+    }
+    return lines.join("\n");
+}
+/** Validates the `checks` section and fills in its defaults. `where` names it, e.g. "config gradgate.yml: checks". */
+function parseChecks(raw, where) {
+    const data = structuredClone(raw ?? {});
+    if (data === null || typeof data !== "object" || Array.isArray(data)) {
+        throw new core_errors/* InputError */.d(`${where} must be a mapping, got ${(0,core_errors/* quote */.h)(raw)}`);
+    }
+    const validate = config_compile();
+    const wrapped = { checks: data };
+    if (!validate(wrapped))
+        throw new core_errors/* InputError */.d(config_describe(validate.errors ?? [], wrapped, where));
+    return wrapped.checks;
+}
+function knownOptimizers(suite) {
+    return [...new Set(suite.cases.map((c) => c.optimizer))];
+}
+function checkOptimizer(suite, name, where) {
+    const known = knownOptimizers(suite);
+    if (!known.includes(name)) {
+        throw new core_errors/* InputError */.d(`${where}.optimizer ${(0,core_errors/* quote */.h)(name)} is not an optimizer of the suite (known: ${known.join(", ")})`);
+    }
+}
+/** The cases a declaration applies to; at least one, else an error saying what the suite has. */
+function matchCases(suite, d, where) {
+    checkOptimizer(suite, d.optimizer, where);
+    // Scenario cases replay a resume or a learning-rate change, which the checks' own runs do not: ordinary cases only.
+    const own = suite.cases.filter((c) => c.optimizer === d.optimizer && c.scenario === undefined);
+    const found = own.filter((c) => (c.problem === d.problem || c.problemKey === d.problem) && (d.set === undefined || c.set === d.set));
+    if (found.length === 0) {
+        const problems = [...new Set(own.map((c) => c.problemKey))].join(", ");
+        const sets = [...new Set(own.map((c) => c.set))].join(", ");
+        throw new core_errors/* InputError */.d(`${where} matches no case: ${d.optimizer} runs ${problems} (sets: ${sets}), not ${(0,core_errors/* quote */.h)(d.problem)}` +
+            (d.set !== undefined ? ` in set ${(0,core_errors/* quote */.h)(d.set)}` : ""));
+    }
+    return found.map((spec) => ({ spec, definition: (0,package_problems/* getProblem */.Ai)(spec.problem) }));
+}
+/**
+ * Validates `raw` (the config's `checks`, possibly absent) and binds every declaration to the suite.
+ * `file` names the config in messages.
+ */
+function resolveChecks(raw, suite, file) {
+    const where = `config ${file}: checks`;
+    const checks = parseChecks(raw, where);
+    const minimum = checks.minimum.map((d, i) => {
+        const w = `${where}.minimum[${i}]`;
+        const cases = matchCases(suite, d, w);
+        for (const { spec, definition } of cases) {
+            const basins = (definition.basins ?? []).map((b) => b.name);
+            if (d.basin === "global") {
+                if (spec.fStarKind === "lower-bound") {
+                    throw new core_errors/* InputError */.d(`${w}: problem ${spec.problemKey} knows only a lower bound of f*, so it has no known minimum to reach`);
+                }
+            }
+            else if (!basins.includes(d.basin)) {
+                throw new core_errors/* InputError */.d(`${w}.basin ${(0,core_errors/* quote */.h)(d.basin)} is not a basin of problem ${definition.name} (known: global${basins.map((b) => ", " + b).join("")})`);
+            }
+            const target = d.basin === "global" ? spec.fStar : definition.basins.find((b) => b.name === d.basin).f;
+            if (d.tolerance.kind === "relative" && target === 0) {
+                throw new core_errors/* InputError */.d(`${w}.tolerance: a relative tolerance needs a nonzero target, and ${spec.problemKey} has f = 0 there; use kind: absolute`);
+            }
+        }
+        return {
+            where: w,
+            optimizer: d.optimizer,
+            gating: d.gating,
+            cases,
+            basin: d.basin,
+            tolerance: d.tolerance,
+            share: d.share,
+        };
+    });
+    const rate = checks.rate.map((d, i) => {
+        const w = `${where}.rate[${i}]`;
+        const cases = matchCases(suite, d, w);
+        for (const { spec, definition } of cases) {
+            const instance = probeInstance(definition, spec.params);
+            if (quadraticFacts(instance) === null || instance.stochastic) {
+                throw new core_errors/* InputError */.d(`${w}.problem: ${spec.problemKey} has no known spectrum; rate checks need a quadratic (quadratic, or noisy-quadratic with sigma: 0)`);
+            }
+            if (!d.tuned) {
+                numberHyper(spec, d.names.lr, w, "step size", true);
+                if (d.method !== "gradient-descent")
+                    numberHyper(spec, d.names.momentum, w, "momentum", true);
+            }
+        }
+        return {
+            where: w,
+            optimizer: d.optimizer,
+            gating: d.gating,
+            cases,
+            method: d.method,
+            tuned: d.tuned,
+            names: d.names,
+            tolerance: d.tolerance,
+            steps: d.steps,
+        };
+    });
+    const stationary = checks.stationary.map((d, i) => {
+        const w = `${where}.stationary[${i}]`;
+        const cases = matchCases(suite, d, w);
+        for (const { spec, definition } of cases) {
+            const facts = quadraticFacts(probeInstance(definition, spec.params));
+            if (facts === null || !(facts.sigma > 0) || facts.rotation !== null) {
+                throw new core_errors/* InputError */.d(`${w}.problem: ${spec.problemKey} is not a diagonal quadratic with gradient noise (use noisy-quadratic with sigma > 0)`);
+            }
+            const lr = numberHyper(spec, d.names.lr, w, "step size");
+            const bad = Array.from(facts.eigenvalues).find((l) => !(lr * l > 0 && lr * l < 2));
+            if (bad !== undefined) {
+                throw new core_errors/* InputError */.d(`${w}: case ${spec.id} has lr·λ = ${lr * bad} for λ = ${bad}; SGD has a stationary distribution only for 0 < lr·λ < 2`);
+            }
+        }
+        return {
+            where: w,
+            optimizer: d.optimizer,
+            gating: d.gating,
+            cases,
+            names: d.names,
+            precision: d.precision,
+            sigmas: d.sigmas,
+        };
+    });
+    const conformance = checks.conformance.map((d, i) => {
+        const w = `${where}.conformance[${i}]`;
+        checkOptimizer(suite, d.optimizer, w);
+        if (!variants_METHODS.includes(d.method)) {
+            throw new core_errors/* InputError */.d(`${w}.method must be one of ${variants_METHODS.map((m) => JSON.stringify(m)).join(", ")}, got ${(0,core_errors/* quote */.h)(d.method)}`);
+        }
+        const spec = suite.cases.find((c) => c.optimizer === d.optimizer && c.set === d.set && c.scenario === undefined);
+        if (spec === undefined) {
+            const sets = [
+                ...new Set(suite.cases.filter((c) => c.optimizer === d.optimizer).map((c) => c.set)),
+            ].join(", ");
+            throw new core_errors/* InputError */.d(`${w}.set ${(0,core_errors/* quote */.h)(d.set)} is not a hyperparameter set of ${d.optimizer} (known: ${sets})`);
+        }
+        const factory = METHOD_FACTORIES[d.method];
+        const referenceNames = Object.keys(factory.hyperSpecs).filter((k) => !CONVENTION_KEYS.includes(k));
+        for (const key of Object.keys(d.names)) {
+            if (!referenceNames.includes(key)) {
+                throw new core_errors/* InputError */.d(`${w}.names.${key} is not a hyperparameter of ${d.method} (known: ${referenceNames.join(", ")})`);
+            }
+        }
+        const hyper = d.hyper ?? {};
+        for (const key of Object.keys(hyper)) {
+            if (CONVENTION_KEYS.includes(key)) {
+                throw new core_errors/* InputError */.d(`${w}.hyper.${key} selects a form, which the check finds out itself; pin it with ${w}.expect.${key} instead`);
+            }
+        }
+        (0,optimizers/* resolveHyper */.Vn)(factory, hyper, `${w}.hyper`);
+        checkExpect(d.method, d.expect, METHOD_AXES[d.method], w);
+        return {
+            where: w,
+            optimizer: d.optimizer,
+            gating: d.gating,
+            set: d.set,
+            method: d.method,
+            hyper,
+            names: d.names,
+            expect: d.expect,
+            tolerance: d.tolerance,
+            spec,
+        };
+    });
+    return { minimum, rate, stationary, conformance };
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/known-minimum.js
+
+
+/**
+ * One unit in the last digit of `value` as JavaScript spells it (its shortest round-trip form):
+ * 48.9842 → 1e−4, 1.12793e−8 → 1e−13, 0 → 0. A value computed to full precision gets about 1e−16 relative.
+ */
+function lastDigitUnit(value) {
+    if (value === 0 || !Number.isFinite(value))
+        return 0;
+    const text = Math.abs(value).toExponential();
+    const [mantissa, exponent] = text.split("e");
+    const decimals = mantissa.includes(".") ? mantissa.split(".")[1].length : 0;
+    return Math.pow(10, Number(exponent) - decimals);
+}
+function targets(definition, spec) {
+    const out = [];
+    if (spec.fStarKind !== "lower-bound") {
+        out.push({
+            name: "global",
+            f: spec.fStar,
+            text: `the global minimum f* = ${spec.fStar}`,
+            source: definition.fStarNote ? `${definition.source}; ${definition.fStarNote}` : definition.source,
+        });
+    }
+    for (const b of definition.basins ?? [])
+        out.push(basinTarget(b));
+    return out;
+}
+function basinTarget(b) {
+    return {
+        name: b.name,
+        f: b.f,
+        text: `the ${b.name} basin f = ${b.f} at (${b.x.join(", ")})`,
+        source: b.source,
+    };
+}
+/** The largest |f − target| a run may have: the declared tolerance plus the rounding of the target. */
+function allowance(target, tolerance) {
+    const declared = tolerance.kind === "absolute" ? tolerance.value : tolerance.value * Math.abs(target);
+    return declared + lastDigitUnit(target);
+}
+/** Whether `f` is at target `t`, to name where a run ended: the allowance, but at least 1e−6·max(1, |t|). */
+function near(f, t, tolerance) {
+    return Math.abs(f - t.f) <= Math.max(allowance(t.f, tolerance), 1e-6 * Math.max(1, Math.abs(t.f)));
+}
+/** Final losses of the case's seeds from the check's own runs. */
+async function ownRuns(request) {
+    const { spec, source } = request;
+    if (source === undefined)
+        throw new Error("known minimum: neither results nor a source to run the case");
+    const instance = probeInstance(request.definition, spec.params);
+    const out = [];
+    for (let seed = 0; seed < spec.seeds; seed++) {
+        let last = NaN;
+        const outcome = await source.run({
+            definition: request.definition,
+            params: spec.params,
+            problemKey: spec.problemKey,
+            hyper: spec.hyper,
+            steps: spec.budget.steps,
+            suiteSeed: request.suiteSeed,
+            seedIndex: seed,
+        }, (_k, x) => {
+            last = instance.objective(x);
+        });
+        if (outcome.error !== undefined)
+            out.push({ seed, f: null, why: outcome.error });
+        else
+            out.push({ seed, f: Number.isFinite(last) ? last : null, why: "the loss is not finite" });
+    }
+    return out;
+}
+function fromResults(spec, runs) {
+    return runs.map((r) => {
+        if (r.finalGap !== null)
+            return { seed: r.seed, f: spec.fStar + r.finalGap };
+        const why = r.stop === "error"
+            ? `failed: ${r.error ?? "no reason given"}`
+            : r.divergedAt !== null
+                ? `diverged (${r.divergence ?? "unknown"}) at step ${r.divergedAt}`
+                : `ended without a final loss (${r.stop})`;
+        return { seed: r.seed, f: null, why };
+    });
+}
+/** Runs the known-minimum check on one case. */
+async function checkKnownMinimum(request) {
+    const { spec, tolerance } = request;
+    const all = targets(request.definition, spec);
+    const target = all.find((t) => t.name === request.basin);
+    if (target === undefined)
+        throw new Error(`known minimum: ${spec.problemKey} has no target ${request.basin}`);
+    const id = request.basin === "global" ? "known-minimum" : `known-minimum:${request.basin}`;
+    const allowed = allowance(target.f, tolerance);
+    const rounding = lastDigitUnit(target.f);
+    const finals = request.runs !== undefined ? fromResults(spec, request.runs) : await ownRuns(request);
+    const required = Math.ceil(request.share * finals.length - 1e-9);
+    const misses = [];
+    let reached = 0;
+    let worst = 0;
+    let worstF = null;
+    for (const run of finals) {
+        if (run.f === null) {
+            misses.push(`seed ${run.seed} ${run.why ?? "has no final loss"}`);
+            continue;
+        }
+        const off = Math.abs(run.f - target.f);
+        if (off >= worst) {
+            worst = off;
+            worstF = run.f;
+        }
+        if (off <= allowed) {
+            reached++;
+            continue;
+        }
+        const other = all.find((t) => t !== target && near(run.f, t, tolerance));
+        const at = other ? `, ${other.text}` : `, ${format_short(off)} away`;
+        misses.push(`seed ${run.seed} ended at f = ${Number(run.f.toPrecision(7))}${at}`);
+    }
+    const tolText = `${format_short(tolerance.value)} (${tolerance.kind})` +
+        (rounding > 0 ? ` plus ${format_short(rounding)} for the last digit of the published value` : "");
+    const reportedTolerance = tolerance.kind === "absolute"
+        ? { kind: "absolute", value: allowed }
+        : { kind: "relative", value: allowed / Math.abs(target.f) };
+    const base = {
+        id,
+        gating: request.gating,
+        source: target.source,
+        measured: worstF,
+        expected: target.f,
+        tolerance: reportedTolerance,
+    };
+    const head = `known minimum (${target.text})`;
+    if (finals.length > 0 && reached >= required) {
+        const rest = misses.length > 0 ? `; ${misses.join("; ")}` : "";
+        return {
+            ...base,
+            status: "pass",
+            summary: `${head}: ${reached} of ${finals.length} seeds reached it within ${tolText}; largest |f − ${target.f}| = ${format_short(worst)}${rest}`,
+        };
+    }
+    return {
+        ...base,
+        status: "fail",
+        summary: `${head}: ${reached} of ${finals.length} seeds reached it within ${tolText}, ${required} required: ${misses.join("; ") || "no runs"}`,
+    };
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/stationary.js
+/**
+ * Stationary variance of SGD on the noisy quadratic, and how precisely a time average estimates it —
+ * the theory behind the stationary-variance check.
+ *
+ * Model: f(x) = ½ Σᵢ λᵢ xᵢ², gradient estimates ∇f(x) + σz with z ~ N(0, I) independent across steps,
+ * plain SGD x ← x − η·(∇f(x) + σz). Per coordinate (dropping i):
+ *
+ *   x_{t+1} = a·x_t − ησ·z_t,   a = 1 − ηλ.
+ *
+ * For |a| < 1 (0 < ηλ < 2) this is a stable AR(1) process. Taking the variance of both sides in the
+ * stationary state, v = a²·v + η²σ², so
+ *
+ *   E[x²] → v = η²σ²/(1 − a²) = η²σ²/(ηλ(2 − ηλ)) = ησ²/(λ(2 − ηλ)).
+ *
+ * (Derived here; the mean loss Σ ½λᵢvᵢ = Σ ησ²/(2(2 − ηλᵢ)) is `sgdStationaryLoss` in
+ * src/problems/noisy-quadratic.ts.) From x₀ the mean square approaches v geometrically:
+ * E[x_t²] − v = a^(2t)·(x₀² − v) (same recursion without noise).
+ *
+ * Precision of a time average. In the stationary state Cov(x_t, x_{t+h}) = v·a^|h| and, x being
+ * Gaussian, Cov(x_t², x_{t+h}²) = 2·(v·a^|h|)² (Isserlis 1918, Biometrika 12(1/2):134–139). The variance
+ * of the mean of T consecutive x_t² is, for T ≫ 1/(1 − a²), (1/T)·Σ_h 2v²a^(2|h|) (the long-run variance
+ * of a stationary sequence: common practice), so its relative standard error is
+ *
+ *   se = √(2(1 + a²) / (T(1 − a²))).
+ *
+ * Cost: O(1) per call.
+ */
+/** Throws a RangeError unless 0 < ηλ < 2 (otherwise SGD has no stationary distribution). */
+function checkStable(lambda, lr) {
+    const t = lr * lambda;
+    if (!(t > 0 && t < 2)) {
+        throw new RangeError(`SGD has no stationary distribution unless 0 < lr·λ < 2; got lr = ${lr}, λ = ${lambda}`);
+    }
+    return 1 - t;
+}
+/** v = ησ²/(λ(2 − ηλ)): the stationary E[x²] of one coordinate with curvature λ (see above). */
+function sgdStationaryVariance(lambda, sigma, lr) {
+    checkStable(lambda, lr);
+    return (lr * sigma * sigma) / (lambda * (2 - lr * lambda));
+}
+/** Relative standard error √(2(1 + a²)/(T(1 − a²))) of the mean of T stationary values of x², a = 1 − ηλ. */
+function timeAverageRelativeError(lambda, lr, steps) {
+    const a = checkStable(lambda, lr);
+    const a2 = a * a;
+    return Math.sqrt((2 * (1 + a2)) / (steps * (1 - a2)));
+}
+/**
+ * Steps to discard so that the start-up transient biases the time average by at most `fraction` of its
+ * standard error: the transient adds at most a^(2B)·|x₀² − v|/(1 − a²) to the sum of the averaged
+ * values, i.e. a^(2B)·|x₀² − v|/((1 − a²)·T·v) to the relative mean.
+ */
+function burnInSteps(lambda, sigma, lr, x0, steps, fraction) {
+    const a = checkStable(lambda, lr);
+    const v = sgdStationaryVariance(lambda, sigma, lr);
+    const excess = Math.abs(x0 * x0 - v) / ((1 - a * a) * steps * v);
+    const allowed = fraction * timeAverageRelativeError(lambda, lr, steps);
+    if (excess <= allowed || a === 0)
+        return 0;
+    return Math.ceil(Math.log(allowed / excess) / (2 * Math.log(Math.abs(a))));
+}
+/**
+ * Averaged steps T that make the relative standard error of the slowest coordinate at most `target`:
+ * T = 2(1 + a²)/((1 − a²)·target²) with a for the eigenvalue where that is largest.
+ */
+function stepsForPrecision(eigenvalues, lr, target) {
+    let worst = 0;
+    for (let i = 0; i < eigenvalues.length; i++) {
+        const a = checkStable(eigenvalues[i], lr);
+        const a2 = a * a;
+        worst = Math.max(worst, (2 * (1 + a2)) / (1 - a2));
+    }
+    return Math.ceil(worst / (target * target));
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/stationary-check.js
+/**
+ * SGD's stationary variance on the noisy quadratic: does the optimizer under test, claimed to be plain
+ * SGD with step η, settle into the noise floor the closed form predicts?
+ *
+ * Theory (./stationary.ts, derived there): E[xᵢ²] → vᵢ = ησ²/(λᵢ(2 − ηλᵢ)) per coordinate.
+ * Measurement: one long run from the suite's start point of seed 0 with the suite's noise stream; the
+ * first B steps are discarded (B makes the start-up transient worth at most 5% of a standard error) and
+ * xᵢ² is averaged over the next T steps, T chosen so that the relative standard error of the slowest
+ * coordinate is `precision` (at most 10⁷ steps).
+ * Tolerance, justified by the run length: each coordinate's average must lie within `sigmas` standard
+ * errors se_i = √(2(1 + aᵢ²)/(T(1 − aᵢ²))) (aᵢ = 1 − ηλᵢ) of vᵢ, relative. With the default 5 and a
+ * correct SGD, the chance that any of n ≤ 100 coordinates lands outside is below 6e−5 (Bonferroni over
+ * the coordinates, normal approximation of a long time average).
+ */
+
+
+
+
+
+
+/** The longest run the check makes. */
+const MAX_STATIONARY_STEPS = 10_000_000;
+const STATIONARY_SOURCE = "closed form E[xᵢ²] = ησ²/(λᵢ(2 − ηλᵢ)) of the AR(1) recursion xᵢ ← (1 − ηλᵢ)xᵢ − ησzᵢ (derived in src/reference/stationary.ts); time-average precision via Isserlis (1918), Biometrika 12(1/2):134–139 (reference from memory)";
+/** Runs the stationary-variance check on one case. */
+async function checkStationary(request) {
+    const { spec } = request;
+    const instance = probeInstance(request.definition, spec.params);
+    const facts = quadraticFacts(instance);
+    if (facts === null || !(facts.sigma > 0) || facts.rotation !== null) {
+        throw new core_errors/* InputError */.d(`${request.where}: problem ${spec.problemKey} is not a diagonal quadratic with gradient noise (use noisy-quadratic with sigma > 0)`);
+    }
+    const lr = numberHyper(spec, request.names.lr, request.where, "step size");
+    const eig = facts.eigenvalues;
+    const sigma = facts.sigma;
+    const base = { id: "stationary-variance", gating: request.gating, source: STATIONARY_SOURCE };
+    const head = `stationary variance (SGD, η = ${fmt(lr)}, σ = ${fmt(sigma)})`;
+    for (const l of eig) {
+        if (!(lr * l > 0 && lr * l < 2)) {
+            throw new core_errors/* InputError */.d(`${request.where}: case ${spec.id} has η·λ = ${fmt(lr * l)} for λ = ${fmt(l)}; SGD has a stationary distribution only for 0 < η·λ < 2`);
+        }
+    }
+    const averaged = Math.min(MAX_STATIONARY_STEPS, stepsForPrecision(eig, lr, request.precision));
+    const seedRequest = {
+        definition: request.definition,
+        params: spec.params,
+        problemKey: spec.problemKey,
+        hyper: spec.hyper,
+        suiteSeed: request.suiteSeed,
+        seedIndex: 0,
+    };
+    const { x0 } = requestProblem({ ...seedRequest, steps: 0 });
+    let burnIn = 0;
+    for (let i = 0; i < eig.length; i++)
+        burnIn = Math.max(burnIn, burnInSteps(eig[i], sigma, lr, x0[i], averaged, 0.05));
+    const n = eig.length;
+    const sums = new Float64Array(n);
+    const outcome = await request.source.run({ ...seedRequest, steps: burnIn + averaged }, (k, x) => {
+        if (k <= burnIn)
+            return;
+        for (let i = 0; i < n; i++)
+            sums[i] += x[i] * x[i];
+    });
+    if (outcome.error !== undefined) {
+        return { ...base, status: "fail", summary: `${head}: the run failed: ${outcome.error}` };
+    }
+    let worst = 0;
+    let worstZ = -1;
+    for (let i = 0; i < n; i++) {
+        const v = sgdStationaryVariance(eig[i], sigma, lr);
+        const z = Math.abs(sums[i] / averaged / v - 1) / timeAverageRelativeError(eig[i], lr, averaged);
+        if (z > worstZ) {
+            worstZ = z;
+            worst = i;
+        }
+    }
+    const v = sgdStationaryVariance(eig[worst], sigma, lr);
+    const mean = sums[worst] / averaged;
+    const se = timeAverageRelativeError(eig[worst], lr, averaged);
+    const allowed = request.sigmas * se;
+    const where = `coordinate ${worst + 1} (λ = ${fmt(eig[worst])})`;
+    const run = `over ${averaged} steps after ${burnIn} of burn-in`;
+    const tolerance = { kind: "relative", value: allowed };
+    const off = mean / v - 1;
+    if (worstZ <= request.sigmas) {
+        return {
+            ...base,
+            status: "pass",
+            summary: `${head}: ${run}, E[xᵢ²] matches ησ²/(λᵢ(2 − ηλᵢ)) in all ${n} coordinates; farthest is ${where}: ` +
+                `${fmt(mean)} vs ${fmt(v)}, ${fmt(worstZ)} standard errors (tolerance ${request.sigmas} standard errors = ${pct(allowed)})`,
+            measured: mean,
+            expected: v,
+            tolerance,
+        };
+    }
+    return {
+        ...base,
+        status: "fail",
+        summary: `${head}: ${run}, ${where} averages E[x²] = ${fmt(mean)}, ${pct(Math.abs(off))} ${off > 0 ? "above" : "below"} ` +
+            `the closed form ησ²/(λ(2 − ηλ)) = ${fmt(v)} (tolerance ${pct(allowed)}, ${request.sigmas} standard errors of the time average)`,
+        measured: mean,
+        expected: v,
+        tolerance,
+    };
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/run-checks.js
+/**
+ * Runs every declared reference check of a suite and returns their results per case and at gate level,
+ * as `CheckResult`s for the verdict document (src/compare/types.ts). Engine code: plain data in, plain
+ * data out, no file I/O; the optimizers under test are reached through `sourceFor`.
+ *
+ * - known minimum: per matched case, from the candidate results when given (else from the check's own
+ *   runs of the case's seeds);
+ * - rate and stationary variance: per matched case, from the check's own run of seed 0;
+ * - conformance: per declaration, at gate level (it is about the code, not about one case).
+ * Results keep declaration order; cases keep suite order.
+ */
+
+
+
+
+
+
+
+/** Sources for the reference optimizers ("reference:NAME"); anything else is an input error. */
+function referenceSourceFor(use) {
+    const [kind, name] = use.includes(":")
+        ? [use.slice(0, use.indexOf(":")), use.slice(use.indexOf(":") + 1)]
+        : ["reference", use];
+    if (kind !== "reference") {
+        throw new core_errors/* InputError */.d(`reference checks: no way to run ${(0,core_errors/* quote */.h)(use)} was given (only reference optimizers run by default)`);
+    }
+    return inProcessSource((0,optimizers/* getOptimizer */.KH)(name, `reference checks: ${(0,core_errors/* quote */.h)(use)}`), use);
+}
+/** Runs the declared checks. Rejects only for input errors and for bugs, never for a failing optimizer. */
+async function runReferenceChecks(input) {
+    const { suite, checks } = input;
+    const sourceFor = input.sourceFor ?? referenceSourceFor;
+    const sources = new Map();
+    const source = (use) => {
+        let s = sources.get(use);
+        if (s === undefined) {
+            s = Promise.resolve(sourceFor(use));
+            sources.set(use, s);
+        }
+        return s;
+    };
+    const runsById = new Map();
+    for (const r of input.results ?? [])
+        runsById.set(r.case.id, r);
+    const perCase = new Map();
+    const add = (id, result) => {
+        const list = perCase.get(id) ?? [];
+        list.push(result);
+        perCase.set(id, list);
+    };
+    for (const d of checks.minimum) {
+        for (const { spec, definition } of d.cases) {
+            const result = input.results !== undefined ? runsById.get(spec.id) : undefined;
+            if (input.results !== undefined && result === undefined) {
+                add(spec.id, {
+                    id: d.basin === "global" ? "known-minimum" : `known-minimum:${d.basin}`,
+                    status: "skipped",
+                    gating: d.gating,
+                    summary: `known minimum: the results have no runs of case ${spec.id}`,
+                    source: definition.source,
+                });
+                continue;
+            }
+            add(spec.id, await checkKnownMinimum({
+                spec,
+                definition,
+                suiteSeed: suite.seed,
+                basin: d.basin,
+                tolerance: d.tolerance,
+                share: d.share,
+                gating: d.gating,
+                ...(result !== undefined ? { runs: result.runs } : { source: await source(spec.use) }),
+            }));
+        }
+    }
+    for (const d of checks.rate) {
+        for (const { spec, definition } of d.cases) {
+            add(spec.id, await checkRate({
+                spec,
+                definition,
+                suiteSeed: suite.seed,
+                method: d.method,
+                tuned: d.tuned,
+                names: d.names,
+                tolerance: d.tolerance,
+                maxSteps: d.steps,
+                gating: d.gating,
+                source: await source(spec.use),
+                where: d.where,
+            }));
+        }
+    }
+    for (const d of checks.stationary) {
+        for (const { spec, definition } of d.cases) {
+            add(spec.id, await checkStationary({
+                spec,
+                definition,
+                suiteSeed: suite.seed,
+                names: d.names,
+                precision: d.precision,
+                sigmas: d.sigmas,
+                gating: d.gating,
+                source: await source(spec.use),
+                where: d.where,
+            }));
+        }
+    }
+    const gate = [];
+    for (const d of checks.conformance) {
+        gate.push(...(await checkConformance({
+            optimizer: d.optimizer,
+            method: d.method,
+            claim: d.hyper,
+            base: d.spec.hyper,
+            names: d.names,
+            expect: d.expect,
+            tolerance: d.tolerance,
+            gating: d.gating,
+            source: await source(d.spec.use),
+            where: d.where,
+        })));
+    }
+    const cases = {};
+    for (const c of suite.cases) {
+        const list = perCase.get(c.id);
+        if (list !== undefined)
+            cases[c.id] = list;
+    }
+    return { cases, gate };
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/sources.js
+/**
+ * Trajectory sources for every kind of optimizer a suite can name: reference optimizers and module
+ * optimizers run in this thread (`inProcessSource`), process-adapter optimizers run through their
+ * adapter's session — the harness serves the evaluations from its own problem instance, pauses after the
+ * step a learning-rate change is due, and observes every iterate the client reports (RunControl in
+ * src/adapters/process-run.ts). So every reference check, conformance included, works the same for all
+ * three.
+ */
+
+
+
+
+
+/** Wall-clock allowance of one check run through a process; the adapter's own run time-out still applies. */
+const CHECK_RUN_SECONDS = 3600;
+/**
+ * A source for optimizer `optimizer` of a process session. Asks the session for its description first
+ * (hyperparameter names from its defaults, whether it can change its learning rate).
+ */
+async function processSource(session, optimizer, label) {
+    const ready = await session.describe();
+    const description = ready.optimizers.find((o) => o.name === optimizer);
+    if (description === undefined) {
+        throw new core_errors/* InputError */.d(`reference checks: ${(0,core_errors/* quote */.h)(label)}: the adapter serves no optimizer ${(0,core_errors/* quote */.h)(optimizer)} (it serves: ${ready.optimizers.map((o) => o.name).join(", ")})`);
+    }
+    const canChangeLr = description.capabilities.includes("lr");
+    return {
+        label,
+        ...(description.defaults !== undefined ? { hyperNames: Object.keys(description.defaults) } : {}),
+        async run(request, observe) {
+            if (request.lrChange !== undefined && !canChangeLr)
+                return { steps: 0, lrChange: "unsupported" };
+            const { problem, x0 } = requestProblem(request);
+            const spec = {
+                id: `reference-check/${label}/${request.problemKey}`,
+                optimizer: label,
+                use: label,
+                set: "reference-check",
+                hyper: request.hyper,
+                problem: request.definition.name,
+                problemKey: request.problemKey,
+                params: request.params,
+                dim: problem.dim,
+                fStar: problem.fStar,
+                fStarKind: problem.fStarKind,
+                budget: { steps: request.steps, evaluations: 0, seconds: CHECK_RUN_SECONDS },
+                stopAt: 0,
+                ladder: [],
+                blowUp: Number.MAX_VALUE,
+                checkpoints: [0],
+                fingerprintSteps: 0,
+                seeds: 1,
+                measureEvery: 1,
+            };
+            observe(0, x0);
+            let steps = 0;
+            const change = request.lrChange;
+            const [metrics] = await session.run([
+                {
+                    spec,
+                    seedIndex: request.seedIndex,
+                    suiteSeed: request.suiteSeed,
+                    definition: request.definition,
+                    optimizer,
+                    control: {
+                        afterStep: (k, x) => {
+                            steps = k;
+                            observe(k, x);
+                        },
+                        ...(change !== undefined
+                            ? { pauseAt: change.after, action: { kind: "lr", lr: change.lr } }
+                            : {}),
+                    },
+                },
+            ]);
+            const lrChange = change === undefined ? "none" : "applied";
+            if (metrics.stop === "error")
+                return { steps, error: metrics.error ?? "the run failed", lrChange };
+            if (metrics.stop === "diverged") {
+                return {
+                    steps,
+                    error: `the iterate is not finite after step ${metrics.divergedAt ?? steps}`,
+                    lrChange,
+                };
+            }
+            if (steps < request.steps)
+                return { steps, error: `the run stopped after step ${steps} (${metrics.stop})`, lrChange };
+            return { steps, lrChange };
+        },
+    };
+}
+/** Sources for reference, module and process optimizers of `suite` (its `adapters` context). */
+function suiteSources(suite) {
+    const sessions = new Map();
+    const sources = new Map();
+    const context = suite.adapters;
+    const adapterNames = Object.keys(context?.processes ?? {});
+    const make = async (use) => {
+        const canonical = (0,runner_resolve/* canonicalUse */.sx)(use);
+        const spec = (0,adapters_use/* parseUse */.f)(canonical, adapterNames, `reference checks: ${(0,core_errors/* quote */.h)(use)}`);
+        if (spec.kind === "process") {
+            let session = sessions.get(spec.adapter);
+            if (session === undefined) {
+                session = new adapters_session/* ProcessSession */.M(context.processes[spec.adapter]);
+                sessions.set(spec.adapter, session);
+            }
+            return processSource(session, spec.optimizer, canonical);
+        }
+        const { factory } = await (0,runner_resolve/* loadOptimizer */.uk)(canonical, `reference checks: ${(0,core_errors/* quote */.h)(use)}`, context);
+        return inProcessSource(factory, canonical);
+    };
+    return {
+        sourceFor(use) {
+            let s = sources.get(use);
+            if (s === undefined) {
+                s = make(use);
+                sources.set(use, s);
+            }
+            return s;
+        },
+        async close() {
+            const all = [...sessions.values()];
+            sessions.clear();
+            await Promise.all(all.map((s) => s.close()));
+        },
+    };
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/configured.js
+/**
+ * The reference checks a config declares, run for a command: resolves the suite with its module and
+ * process optimizers, binds the `checks` section to it, runs the checks (known minima read from the
+ * candidate results when given) and closes any optimizer process it started. Returns null when the
+ * config declares no checks, so callers can leave the verdict exactly as it was.
+ */
+
+
+
+
+/**
+ * Runs the checks declared in `config` (read from `file`, whose directory is `baseDir`). Throws an
+ * `InputError` for a bad `checks` section; a failing optimizer only makes checks fail.
+ */
+async function runConfiguredChecks(config, file, baseDir, results) {
+    const declared = parseChecks(config.checks, `config ${file}: checks`);
+    const count = declared.minimum.length + declared.rate.length + declared.stationary.length + declared.conformance.length;
+    if (count === 0)
+        return null;
+    const suite = await prepareSuite(config, file, { baseDir });
+    const checks = resolveChecks(config.checks, suite, file);
+    const sources = suiteSources(suite);
+    try {
+        return await runReferenceChecks({ suite, checks, results, sourceFor: sources.sourceFor });
+    }
+    finally {
+        await sources.close();
+    }
+}
+
+;// CONCATENATED MODULE: ./build/package/reference/merge.js
+function failing(checks) {
+    return checks.filter((c) => c.status === "fail" && c.gating);
+}
+/** The verdict with the report's checks added (see the file comment). */
+function applyReferenceChecks(verdict, report) {
+    const gateReasons = [...verdict.gate.reasons];
+    const seen = new Set();
+    const cases = verdict.cases.map((c) => {
+        const added = report.cases[c.id];
+        if (added === undefined || added.length === 0)
+            return c;
+        seen.add(c.id);
+        const failed = failing(added);
+        const reasons = failed.map((f) => ({ code: "check", message: f.summary }));
+        for (const f of failed)
+            gateReasons.push({ code: "check", case: c.id, message: `${c.id}: ${f.summary}` });
+        return {
+            ...c,
+            checks: [...c.checks, ...added],
+            reasons: [...c.reasons, ...reasons],
+            failsGate: c.failsGate || failed.length > 0,
+        };
+    });
+    // Checks of cases the verdict does not list (e.g. a case filtered out of the comparison) still count.
+    for (const [id, list] of Object.entries(report.cases)) {
+        if (seen.has(id))
+            continue;
+        for (const f of failing(list))
+            gateReasons.push({ code: "check", case: id, message: `${id}: ${f.summary}` });
+    }
+    for (const f of failing(report.gate))
+        gateReasons.push({ code: "check", message: f.summary });
+    return {
+        ...verdict,
+        gate: {
+            verdict: gateReasons.length > 0 ? "fail" : "pass",
+            reasons: gateReasons,
+            checks: [...verdict.gate.checks, ...report.gate],
+        },
+        cases,
+    };
+}
+
+// EXTERNAL MODULE: ./build/package/runner/pool.js + 1 modules
+var pool = __webpack_require__(6460);
 ;// CONCATENATED MODULE: ./build/package/cli/format.js
 /** Plain-text tables and number formats for the terminal. */
 /** Renders rows as a left-aligned text table (numbers right-aligned) with a header rule. */
@@ -4092,7 +6765,13 @@ var dist = __webpack_require__(8815);
 let load_validator = null;
 function validate(data) {
     if (load_validator === null) {
-        const ajv = new _2020.Ajv2020({ allErrors: true, verbose: true, useDefaults: true, strict: true, allowUnionTypes: true });
+        const ajv = new _2020.Ajv2020({
+            allErrors: true,
+            verbose: true,
+            useDefaults: true,
+            strict: true,
+            allowUnionTypes: true,
+        });
         load_validator = ajv.compile(configSchema);
     }
     const ok = load_validator(data);
@@ -4210,7 +6889,11 @@ function describeErrors(errors, data, where) {
 }
 function knownFields(e) {
     const props = e.parentSchema?.properties;
-    return props ? Object.keys(props).filter((k) => k !== "$schema").join(", ") : "";
+    return props
+        ? Object.keys(props)
+            .filter((k) => k !== "$schema")
+            .join(", ")
+        : "";
 }
 /** Rules the schema cannot say: unique names, decreasing ladder, references to optimizer names. */
 function checkCrossFields(config, where) {
@@ -4289,7 +6972,9 @@ function checkAdaptersAndScenarios(config, where) {
  * benchmark run. Behaviours covered: ill-conditioned quadratics (κ = 10, 100, 10⁴), curved valleys
  * (Rosenbrock, helical valley, Wood), bad scaling (Powell, Brown: per-parameter step sizes), a local
  * basin (Freudenstein–Roth), a saddle, a plateau, stochastic gradients (noisy quadratic, mini-batch
- * logistic regression and a two-layer network) and rare features (sparse least squares).
+ * logistic regression and a two-layer network) and rare features (sparse least squares). Extra sets
+ * expose what only shows under specific conditions: AMSGrad (its running maximum) and a large ε (where
+ * ε sits relative to the square root and the bias correction).
  */
 const DEFAULT_SUITE_YAML = `# gradgate default suite
 version: 1
@@ -4305,7 +6990,12 @@ optimizers:
     hyper: { momentum: 0.9 }
   - name: adagrad
   - name: rmsprop
+    sets:
+      large-eps: { eps: 0.0001 }
   - name: adam
+    sets:
+      amsgrad: { amsgrad: true }
+      large-eps: { eps: 0.01 }
   - name: adamw
 problems:
   - use: quadratic
@@ -4713,11 +7403,23 @@ function loadSuiteConfig(host, config) {
         if ((0,external_node_fs_.existsSync)(path))
             return { config: parseConfig((0,external_node_fs_.readFileSync)(path, "utf8"), name), file: name };
     }
-    return { config: parseConfig(DEFAULT_SUITE_YAML, "(built-in default suite)"), file: "(built-in default suite)" };
+    return {
+        config: parseConfig(DEFAULT_SUITE_YAML, "(built-in default suite)"),
+        file: "(built-in default suite)",
+    };
+}
+/**
+ * Loads the config (see loadSuiteConfig) and resolves it into a suite with its module and process
+ * optimizers and scenarios; module paths and adapter directories are relative to the config file.
+ */
+async function loadPreparedSuite(host, configArg) {
+    const { config, file } = loadSuiteConfig(host, configArg);
+    const baseDir = configArg === undefined ? host.cwd : (0,external_node_path_.dirname)((0,external_node_path_.resolve)(host.cwd, configArg));
+    const suite = await prepareSuite(config, file, { baseDir });
+    return { config, file, suite };
 }
 async function runCommand(host, args) {
-    const { config, file } = loadSuiteConfig(host, args.config);
-    const suite = resolveSuite(config, file);
+    const { file, suite } = await loadPreparedSuite(host, args.config);
     const runs = suite.cases.reduce((n, c) => n + c.seeds, 0);
     const workers = args.workers ?? Math.min((0,external_node_os_.availableParallelism)(), 8);
     if (!Number.isInteger(workers) || workers < 1) {
@@ -4804,6 +7506,8 @@ function summaryTable(doc) {
 
 
 
+
+
 const compare_command_DEFAULT_BASELINES = "baselines";
 /** Parses the arguments after "compare" and runs it. */
 async function compareFromArgv(argv, host) {
@@ -4832,8 +7536,10 @@ async function compareFromArgv(argv, host) {
 async function compareCommand(host, args) {
     const results = readResults(host, args.results);
     const baselines = readBaselines(host, args.baselines);
-    if (baselines.size === 0) {
-        throw new core_errors/* InputError */.d(`compare: no baselines in ${args.baselines}/; create them with gradgate rebaseline --results ${args.results} --reason "first baselines"`);
+    if (baselines.size === 0 && !args.quiet) {
+        // A first run: every case is new, and the reference checks still judge right or wrong.
+        host.err(`gradgate: no baselines in ${args.baselines}/ yet: every case is new; create them with ` +
+            `gradgate rebaseline --results ${args.results} --reason "first baselines"\n`);
     }
     let policy = readPolicy(host, args.config);
     if (!args.extraSeeds)
@@ -4844,13 +7550,20 @@ async function compareCommand(host, args) {
         if (!args.quiet && plan.runs > 0) {
             host.err(`gradgate: ${plan.requested.length} inconclusive case(s); running ${plan.runs} extra seed run(s)\n`);
         }
-        const extraRuns = await runPlannedSeeds(results, plan, args.workers);
+        const { suite } = await loadPreparedSuite(host, args.config);
+        const extraRuns = await runPlannedSeeds(results, plan, args.workers, suite.adapters);
         verdict = compareResults(results, baselines, {
             policy,
             extraRuns,
             rerun: rerunSummary(plan, policy.extraSeeds.maxRuns),
         });
     }
+    // Reference checks declared in the config (src/reference/): judged beside the drift, gating as declared.
+    const suiteConfig = loadSuiteConfig(host, args.config);
+    const baseDir = args.config === undefined ? host.cwd : (0,external_node_path_.dirname)((0,external_node_path_.resolve)(host.cwd, args.config));
+    const checks = await runConfiguredChecks(suiteConfig.config, suiteConfig.file, baseDir, results.cases);
+    if (checks !== null)
+        verdict = applyReferenceChecks(verdict, checks);
     if (args.json !== undefined)
         files_writeFileAtomic((0,external_node_path_.resolve)(host.cwd, args.json), (0,json/* canonicalJson */.d)(verdict));
     if (!args.quiet)
@@ -5013,12 +7726,12 @@ function inProcessRuntime(node) {
 }
 /**
  * One baseline file per optimizer, in the order the optimizers first appear in the results.
- * `extraRuns` holds the runs of the extra seeds by case id (iterates are dropped: the fingerprint uses
- * the suite's own seeds).
+ * `extraRuns` holds the runs of the extra seeds by case id (iterates and trace are dropped: the
+ * fingerprint and the charts use the suite's own seeds).
  */
 function buildBaselineFiles(results, stamp, extraRuns = new Map()) {
     if (results.shard) {
-        throw new core_errors/* InputError */.d(`results hold shard ${results.shard.index + 1} of ${results.shard.count} only; merge the shards before rebaselining`);
+        throw new core_errors/* InputError */.d(`results hold shard ${results.shard.index} of ${results.shard.count} only; merge the shards before rebaselining`);
     }
     const byOptimizer = new Map();
     const runtimes = new Map();
@@ -5054,10 +7767,9 @@ function buildBaselineFiles(results, stamp, extraRuns = new Map()) {
         return { ...body, digest: baselineDigest(body) };
     });
 }
+/** Extra seeds serve the statistics only: their iterates and trace are not kept (smaller files). */
 function stripIterates(run) {
-    if (run.iterates === undefined)
-        return run;
-    const copy = { ...run };
+    const copy = { ...run, trace: [] };
     delete copy.iterates;
     return copy;
 }
@@ -5090,6 +7802,7 @@ function auditDrift(verdict) {
  * (src/baselines/store.ts). Refuses results of a different suite unless --allow-suite-change; then the
  * files of optimizers no longer in the suite are removed.
  */
+
 
 
 
@@ -5142,7 +7855,7 @@ async function rebaselineFromArgv(argv, host) {
 async function rebaselineCommand(host, args) {
     const results = readResults(host, args.results);
     if (results.shard) {
-        throw new core_errors/* InputError */.d(`rebaseline: results ${args.results} hold shard ${results.shard.index + 1} of ${results.shard.count} only; ` +
+        throw new core_errors/* InputError */.d(`rebaseline: results ${args.results} hold shard ${results.shard.index} of ${results.shard.count} only; ` +
             `merge the shards first (gradgate merge)`);
     }
     const shownDir = args.baselines.replace(/\/+$/, "");
@@ -5188,7 +7901,9 @@ async function rebaselineCommand(host, args) {
     if (perCase > 0 && !args.quiet) {
         host.err(`gradgate: running ${plan.runs} extra seed run(s) (${perCase} per case) for the baselines\n`);
     }
-    const extraRuns = perCase > 0 ? await runPlannedSeeds(results, plan, args.workers) : new Map();
+    const extraRuns = perCase > 0
+        ? await runPlannedSeeds(results, plan, args.workers, (await loadPreparedSuite(host, args.config)).suite.adapters)
+        : new Map();
     const when = (args.now ?? (() => new Date()))().toISOString();
     const commit = args.commit ?? gitHead(host.cwd);
     const files = buildBaselineFiles(results, { commit, date: when, reason: args.reason }, extraRuns);
