@@ -20,6 +20,7 @@
  * The gate fails on the policy's `failOn` verdicts (strict: everything but unchanged and equivalent), and
  * always on a new divergence.
  */
+import { canonicalJson } from "../core/json.js";
 import { Pcg32, fnv1a64, splitmix64 } from "../core/rng.js";
 import { TOOL_NAME, TOOL_VERSION } from "../core/version.js";
 import type { BaselineCase, BaselineFile } from "../baselines/types.js";
@@ -215,7 +216,8 @@ function emptyCase(spec: CaseSpec, verdict: CaseVerdict, reason: Reason, runs = 
 
 /** The parts of a case that must agree for its runs to be comparable (those in the suite hash). */
 function definitionKey(c: CaseSpec): string {
-  return JSON.stringify([
+  // Canonical (sorted keys): a spec read back from a file and one built in memory must agree.
+  return canonicalJson([
     c.problemKey,
     c.params,
     c.budget,
@@ -243,7 +245,7 @@ function describeDefinitionChange(b: CaseSpec, c: CaseSpec): string {
     "measureEvery",
     "scenario",
   ] as const;
-  const changed = fields.filter((f) => JSON.stringify(b[f]) !== JSON.stringify(c[f]));
+  const changed = fields.filter((f) => canonicalJson(b[f] ?? null) !== canonicalJson(c[f] ?? null));
   return changed
     .map((f) => `${f} ${JSON.stringify(b[f] ?? null)} → ${JSON.stringify(c[f] ?? null)}`)
     .join(", ");
