@@ -6,6 +6,7 @@ import { parseArgs } from "node:util";
 import { InputError } from "../core/errors.js";
 import { TOOL_VERSION } from "../core/version.js";
 import { PROBLEMS } from "../problems/index.js";
+import { Pcg32 } from "../core/rng.js";
 import { OPTIMIZERS } from "../optimizers/index.js";
 import { EXIT, type Host, processHost } from "./host.js";
 import { DEFAULT_RESULTS, runCommand } from "./run-command.js";
@@ -121,8 +122,13 @@ async function dispatch(argv: readonly string[], host: Host): Promise<number> {
       parse(rest, {});
       host.out(
         textTable(
-          ["problem", "dim", "tags", "title"],
-          PROBLEMS.map((p) => [p.name, String(p.params.n?.default ?? "fixed"), p.tags.join(","), p.title]),
+          ["problem", "dim", "params (defaults)", "tags", "title"],
+          PROBLEMS.map((p) => {
+            const params = Object.fromEntries(Object.entries(p.params).map(([k, spec]) => [k, spec.default]));
+            const dim = p.create(params, { noise: new Pcg32(0n, 0n) }).dim;
+            const shown = Object.entries(params).map(([k, v]) => `${k}=${v}`);
+            return [p.name, String(dim), shown.join(" ") || "—", p.tags.join(","), p.title];
+          }),
         ),
       );
       return EXIT.ok;
