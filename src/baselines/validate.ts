@@ -4,6 +4,7 @@
  * long as the ladder, ids that match the optimizer). Every failure is one InputError naming the file, the
  * field and the bad value, and saying how to fix it. Pure: takes the text and the file's name.
  */
+import { jsonPointerToPath, valueAtPointer } from "../core/json-pointer.js";
 import { createHash } from "node:crypto";
 import { Ajv2020 } from "ajv/dist/2020.js";
 import type { ErrorObject } from "ajv";
@@ -134,32 +135,13 @@ function describeParseError(text: string, message: string, where: string): strin
   return `${where}: not valid JSON at line ${line}, column ${column}: ${message.split("\n")[0]}; ${REGENERATE}`;
 }
 
-/** "/cases/3/runs/2/finalGap" → "cases[3].runs[2].finalGap". */
-function fieldPath(pointer: string): string {
-  let out = "";
-  for (const raw of pointer.split("/").slice(1)) {
-    const part = raw.replace(/~1/g, "/").replace(/~0/g, "~");
-    out += /^\d+$/.test(part) ? `[${part}]` : out === "" ? part : `.${part}`;
-  }
-  return out;
-}
-
-function valueAt(data: unknown, pointer: string): unknown {
-  let v: unknown = data;
-  for (const raw of pointer.split("/").slice(1)) {
-    if (v === null || typeof v !== "object") return undefined;
-    v = (v as Record<string, unknown>)[raw.replace(/~1/g, "/").replace(/~0/g, "~")];
-  }
-  return v;
-}
-
 const article = (t: string) => (t === "null" ? "null" : /^[aeiou]/.test(t) ? `an ${t}` : `a ${t}`);
 
 function describeSchemaError(e: ErrorObject | undefined, data: unknown, where: string): string {
   if (e === undefined) return `${where}: does not match the baseline schema; ${REGENERATE}`;
-  const path = fieldPath(e.instancePath);
+  const path = jsonPointerToPath(e.instancePath);
   const p = e.params as Record<string, unknown>;
-  const value = valueAt(data, e.instancePath);
+  const value = valueAtPointer(data, e.instancePath);
   const at = path === "" ? "the top level" : path;
   switch (e.keyword) {
     case "required":

@@ -3,6 +3,7 @@
  * turn every problem into one clear message naming the file, the field, the bad value and the expected
  * form. Pure: takes the text and the file's name, reads nothing itself.
  */
+import { jsonPointerToPath, valueAtPointer } from "../core/json-pointer.js";
 import { Ajv2020 } from "ajv/dist/2020.js";
 import type { ErrorObject } from "ajv";
 import { parse as parseYaml, YAMLParseError } from "yaml";
@@ -118,25 +119,6 @@ function firstLine(s: string): string {
   return s.split("\n")[0];
 }
 
-/** "/problems/2/seeds" → "problems[2].seeds". */
-export function jsonPointerToPath(pointer: string): string {
-  let out = "";
-  for (const raw of pointer.split("/").slice(1)) {
-    const part = raw.replace(/~1/g, "/").replace(/~0/g, "~");
-    out += /^\d+$/.test(part) ? `[${part}]` : out === "" ? part : `.${part}`;
-  }
-  return out;
-}
-
-function valueAt(data: unknown, pointer: string): unknown {
-  let v: unknown = data;
-  for (const raw of pointer.split("/").slice(1)) {
-    if (v === null || typeof v !== "object") return undefined;
-    v = (v as Record<string, unknown>)[raw.replace(/~1/g, "/").replace(/~0/g, "~")];
-  }
-  return v;
-}
-
 const article = (t: string) => (/^[aeiou]/.test(t) ? `an ${t}` : `a ${t}`);
 
 function phrase(e: ErrorObject): string {
@@ -186,7 +168,7 @@ function describeErrors(errors: ErrorObject[], data: unknown, where: string): st
     } else if (e.keyword === "propertyNames") {
       continue; // the pattern error that follows names the key
     } else {
-      const value = valueAt(data, e.instancePath);
+      const value = valueAtPointer(data, e.instancePath);
       line = `${where}: ${path || "the top level"} ${phrase(e)}, got ${quote(value)}`;
       if (e.keyword === "pattern" && e.propertyName !== undefined) {
         line = `${where}: ${path}.${e.propertyName} is not a valid name: ${phrase(e)}`;

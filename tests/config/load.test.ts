@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { jsonPointerToPath, parseConfig } from "../../src/config/load.js";
+import { parseConfig } from "../../src/config/load.js";
+import { jsonPointerToPath } from "../../src/core/json-pointer.js";
 import { InputError } from "../../src/core/errors.js";
 
 const minimal = `
