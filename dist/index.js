@@ -6343,6 +6343,13 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:http2")
 
 /***/ }),
 
+/***/ 8995:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:module");
+
+/***/ }),
+
 /***/ 7030:
 /***/ ((module) => {
 
@@ -8279,6 +8286,283 @@ module.exports = {
 
 /***/ }),
 
+/***/ 4468:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   IN: () => (/* binding */ engineEnvironment),
+/* harmony export */   eB: () => (/* binding */ CREDENTIAL_VARIABLES)
+/* harmony export */ });
+/* unused harmony exports CONTEXT_VARIABLES, isCredentialName */
+/* harmony import */ var _adapters_env_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2387);
+/**
+ * The environment of the engine process (./engine-process.ts), the child process in which the optimizer
+ * under test runs: an allow-list, never the step's own environment.
+ *
+ * A workflow step's environment holds the token input (INPUT_TOKEN), the runner's own credentials
+ * (ACTIONS_RUNTIME_TOKEN, ACTIONS_ID_TOKEN_REQUEST_*), and whatever the workflow put under `env:` — job-wide
+ * secrets included. A deny-list would pass on every secret nobody named, so the engine process gets only
+ * what a Node.js process needs to run (the same allow-list as optimizer processes of the subprocess
+ * adapter, src/adapters/env.ts) and a little non-secret context about the runner. The names of known
+ * credentials, every INPUT_* and ACTIONS_* variable and every value that contains a secret are refused
+ * on top, so that widening the allow-list by mistake still cannot pass them on.
+ */
+
+/** Variables that hold credentials in a workflow step. */
+const CREDENTIAL_VARIABLES = Object.freeze([
+    "INPUT_TOKEN",
+    "GITHUB_TOKEN",
+    "GH_TOKEN",
+    "ACTIONS_RUNTIME_TOKEN",
+    "ACTIONS_ID_TOKEN_REQUEST_TOKEN",
+    "ACTIONS_ID_TOKEN_REQUEST_URL",
+]);
+/** Non-secret context about the runner passed to the engine process when set (on top of PASSED_VARIABLES). */
+const CONTEXT_VARIABLES = Object.freeze([
+    "CI",
+    "GITHUB_ACTIONS",
+    "GITHUB_WORKSPACE",
+    "RUNNER_OS",
+    "RUNNER_ARCH",
+    "RUNNER_TEMP",
+]);
+/** True for a variable the engine process never receives, whatever the allow-list says. */
+function isCredentialName(name) {
+    const upper = name.toUpperCase();
+    return CREDENTIAL_VARIABLES.includes(upper) || upper.startsWith("INPUT_") || upper.startsWith("ACTIONS_");
+}
+/**
+ * The engine process's environment: the allow-listed variables of `parent` that are set, minus credential
+ * names and minus any variable whose value contains one of `secrets` (non-empty values only).
+ */
+function engineEnvironment(parent, secrets) {
+    const hidden = secrets.filter((s) => s !== "");
+    const env = {};
+    for (const name of [..._adapters_env_js__WEBPACK_IMPORTED_MODULE_0__/* .PASSED_VARIABLES */ .r, ...CONTEXT_VARIABLES]) {
+        const value = parent[name];
+        if (value === undefined || isCredentialName(name))
+            continue;
+        if (hidden.some((s) => value.includes(s)))
+            continue;
+        env[name] = value;
+    }
+    return env;
+}
+
+
+/***/ }),
+
+/***/ 6645:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   q: () => (/* binding */ ENGINE_MARKER)
+/* harmony export */ });
+/**
+ * The environment variable that marks the engine process: the Action's entry file, started with it set
+ * to "1", runs the CLI on its arguments instead of the Action (see src/action/main.ts).
+ */
+const ENGINE_MARKER = "GRADGATE_ENGINE_PROCESS";
+
+
+/***/ }),
+
+/***/ 6142:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   F7: () => (/* binding */ EngineFailure),
+/* harmony export */   NV: () => (/* binding */ setEngineEntry),
+/* harmony export */   Yi: () => (/* binding */ OUTCOME_FD),
+/* harmony export */   cn: () => (/* binding */ runEngine)
+/* harmony export */ });
+/* unused harmony export parseOutcome */
+/* harmony import */ var node_child_process__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(1421);
+/* harmony import */ var node_fs__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3024);
+/* harmony import */ var node_module__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8995);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(6760);
+/* harmony import */ var node_url__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(3136);
+/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_7__ = __nccwpck_require__(4552);
+/* harmony import */ var _engine_env_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(4468);
+/* harmony import */ var _engine_marker_js__WEBPACK_IMPORTED_MODULE_6__ = __nccwpck_require__(6645);
+/**
+ * The engine process: every mode that runs code of the repository (gate, a shard's run, merge's extra-seed
+ * re-runs and reference checks, rebaseline) runs it in a child Node.js process, never in the process that
+ * holds the token. Optimizer code loaded in-process (ES modules, on worker threads or on the main thread)
+ * can patch anything in its process — `fetch`, `http`/`https`, the API client — so it must not share a
+ * process with the code that later sends the token to GitHub.
+ *
+ * The child is the Action's own entry file (dist/index.js; the TypeScript sources through tsx in tests),
+ * started with ENGINE_MARKER set, which makes it run the CLI on its arguments (src/action/main.ts). It
+ * gets the allow-listed environment of ./engine-env.ts: no token, no INPUT_*, no ACTIONS_*, no step files
+ * (GITHUB_OUTPUT, GITHUB_STEP_SUMMARY). It writes the results, verdict and baseline files exactly as the CLI
+ * does; this process only reads them, reports, and talks to the API. The child's output goes to the step
+ * log line by line with workflow commands switched off, so nothing it prints is read as a command.
+ *
+ * Exit codes are the CLI's: 0 done, 1 gate failed (compare only), 2 input error (its message fails the
+ * step as it is), 3 internal error. The engine reports its code and error message on a pipe of its own
+ * (OUTCOME_FD) just before exiting; an exit without that report (process.exit or a signal, which optimizer
+ * code can cause) is reported as the engine process ending early, never as a result.
+ */
+
+
+
+
+
+
+
+
+let engineEntry = null;
+/** Lets a bundled entry file start the engine process from itself (see src/action/main.ts). */
+function setEngineEntry(url) {
+    engineEntry = { script: (0,node_url__WEBPACK_IMPORTED_MODULE_4__.fileURLToPath)(url), execArgv: [] };
+}
+/** Compiled: main.js beside this file. Sources (tests, development): main.ts through tsx's loader. */
+function defaultEngineEntry() {
+    const here = new URL(import.meta.url);
+    if (!here.pathname.endsWith(".ts"))
+        return { script: (0,node_url__WEBPACK_IMPORTED_MODULE_4__.fileURLToPath)(new URL("./main.js", here)), execArgv: [] };
+    // Resolved from this file (an absolute URL), so the engine starts from any working directory.
+    const tsx = (0,node_url__WEBPACK_IMPORTED_MODULE_4__.pathToFileURL)((0,node_module__WEBPACK_IMPORTED_MODULE_2__.createRequire)(here).resolve("tsx")).href;
+    return { script: (0,node_url__WEBPACK_IMPORTED_MODULE_4__.fileURLToPath)(new URL("./main.ts", here)), execArgv: ["--import", tsx] };
+}
+/**
+ * The engine process ended without one of the results its command promises. The message is for people
+ * as it is (the step's failure message adds only the "gradgate: " prefix).
+ */
+class EngineFailure extends Error {
+    name = "EngineFailure";
+}
+/** The file descriptor on which the engine process reports its outcome (see ./engine-main.ts). */
+const OUTCOME_FD = 3;
+/** Most bytes read from the outcome pipe. */
+const MAX_OUTCOME = 1024 * 1024;
+/** A line longer than this (characters) is logged in pieces. */
+const MAX_LINE = 64 * 1024;
+/** How long to wait for the output pipes after the engine exited (a grandchild may hold them open), ms. */
+const DRAIN_MS = 2000;
+/** Runs one CLI command in the engine process and returns its exit code (one of `command.codes`). */
+async function runEngine(options, command) {
+    const { host, cwd } = options;
+    const target = command.writes === undefined ? null : (0,node_path__WEBPACK_IMPORTED_MODULE_3__.resolve)(cwd, command.writes);
+    if (target !== null && (0,node_fs__WEBPACK_IMPORTED_MODULE_1__.existsSync)(target) && (0,node_fs__WEBPACK_IMPORTED_MODULE_1__.statSync)(target).isFile())
+        (0,node_fs__WEBPACK_IMPORTED_MODULE_1__.rmSync)(target);
+    const env = { ...(0,_engine_env_js__WEBPACK_IMPORTED_MODULE_5__/* .engineEnvironment */ .IN)(process.env, options.secrets), [_engine_marker_js__WEBPACK_IMPORTED_MODULE_6__/* .ENGINE_MARKER */ .q]: "1" };
+    host.debug(`gradgate engine process: gradgate ${command.argv.join(" ")} (environment: ${Object.keys(env).sort().join(", ")})`);
+    const ended = await host.withoutCommands(() => spawnEngine(host, cwd, env, command.argv));
+    const what = `the engine process (gradgate ${command.argv[0]}, which runs the optimizer code)`;
+    const outcome = ended.signal === null ? parseOutcome(ended.outcome) : null;
+    if (outcome === null || outcome.code !== ended.code || !isCliExit(outcome.code, command.codes)) {
+        const how = ended.signal !== null ? `was ended by ${ended.signal}` : `exited with code ${ended.code}`;
+        throw new EngineFailure(`${what} ${how} before finishing its command; optimizer code can end it early (process.exit, a ` +
+            `signal, running out of memory): see its output in the log above`);
+    }
+    if (outcome.code === 2)
+        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_7__/* .InputError */ .d(outcome.message || `${what} reported an input error`);
+    if (outcome.code === 3)
+        throw new EngineFailure(outcome.message || `${what} reported an internal error`);
+    if (target !== null && !(0,node_fs__WEBPACK_IMPORTED_MODULE_1__.existsSync)(target)) {
+        throw new EngineFailure(`${what} finished without writing ${command.writes}`);
+    }
+    return outcome.code;
+}
+/** Codes the CLI itself ends with for this command: its results, input error, internal error. */
+function isCliExit(code, results) {
+    return results.includes(code) || code === 2 || code === 3;
+}
+/** The last line of the outcome pipe, checked; null when there is none or it is not an outcome. */
+function parseOutcome(text) {
+    const line = text.trimEnd().split("\n").pop() ?? "";
+    let data;
+    try {
+        data = JSON.parse(line);
+    }
+    catch {
+        return null;
+    }
+    const o = data;
+    if (o === null || typeof o !== "object" || !Number.isInteger(o.code) || typeof o.message !== "string") {
+        return null;
+    }
+    return { code: o.code, message: o.message };
+}
+function spawnEngine(host, cwd, env, argv) {
+    const entry = engineEntry ?? defaultEngineEntry();
+    return new Promise((resolvePromise, reject) => {
+        const child = (0,node_child_process__WEBPACK_IMPORTED_MODULE_0__.spawn)(process.execPath, [...entry.execArgv, entry.script, ...argv], {
+            cwd,
+            env,
+            stdio: ["ignore", "pipe", "pipe", "pipe"],
+            shell: false,
+            windowsHide: true,
+        });
+        const out = lineSink((line) => host.info(line));
+        const err = lineSink((line) => host.info(line));
+        const pipe = child.stdio[OUTCOME_FD];
+        let outcome = "";
+        child.stdout.setEncoding("utf8");
+        child.stderr.setEncoding("utf8");
+        pipe.setEncoding("utf8");
+        child.stdout.on("data", out.write);
+        child.stderr.on("data", err.write);
+        pipe.on("data", (text) => {
+            if (outcome.length < MAX_OUTCOME)
+                outcome += text;
+        });
+        let settled = false;
+        let drain = null;
+        const finish = (code, signal) => {
+            if (settled)
+                return;
+            settled = true;
+            if (drain)
+                clearTimeout(drain);
+            out.end();
+            err.end();
+            for (const stream of [child.stdout, child.stderr, pipe])
+                stream.destroy();
+            resolvePromise({ code, signal, outcome });
+        };
+        child.on("error", (error) => {
+            if (settled)
+                return;
+            settled = true;
+            reject(error);
+        });
+        // "close" comes once the output is drained too; a grandchild holding the pipes must not hold up the step.
+        child.on("exit", (code, signal) => {
+            drain = setTimeout(() => finish(code, signal), DRAIN_MS);
+        });
+        child.on("close", (code, signal) => finish(code, signal));
+    });
+}
+/** Splits text into lines (blank ones dropped), emitting each whole line as it arrives. */
+function lineSink(emit) {
+    let pending = "";
+    return {
+        write(text) {
+            pending += text.replace(/\r\n?/g, "\n");
+            const lines = pending.split("\n");
+            pending = lines.pop() ?? "";
+            for (const line of lines)
+                if (line.trim() !== "")
+                    emit(line);
+            while (pending.length > MAX_LINE) {
+                emit(pending.slice(0, MAX_LINE));
+                pending = pending.slice(MAX_LINE);
+            }
+        },
+        end() {
+            if (pending.trim() !== "")
+                emit(pending);
+            pending = "";
+        },
+    };
+}
+
+
+/***/ }),
+
 /***/ 5742:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
@@ -8545,6 +8829,63 @@ class ChildLink {
 
 /***/ }),
 
+/***/ 2387:
+/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   n: () => (/* binding */ minimalEnvironment),
+/* harmony export */   r: () => (/* binding */ PASSED_VARIABLES)
+/* harmony export */ });
+/**
+ * The environment an optimizer process gets: an allow-list, never the harness's own environment.
+ *
+ * The optimizer under test is untrusted code (a pull request can change it), while the harness may run
+ * with a GitHub token and other secrets in its environment (GITHUB_TOKEN, INPUT_*, ACTIONS_*). So the
+ * child receives only the variables named here, copied from the harness when set, plus the literal
+ * values the config gives under `adapters.NAME.env`. A deny-list would leak every secret nobody
+ * thought of; an allow-list leaks none by construction.
+ */
+/**
+ * Variables copied from the harness's environment when set: what programs need to find executables,
+ * a home directory, the locale, the time zone and a temporary directory (and their Windows spellings).
+ */
+const PASSED_VARIABLES = Object.freeze([
+    "PATH",
+    "HOME",
+    "LANG",
+    "LANGUAGE",
+    "LC_ALL",
+    "LC_CTYPE",
+    "LC_NUMERIC",
+    "TZ",
+    "TMPDIR",
+    "TEMP",
+    "TMP",
+    "SYSTEMROOT",
+    "WINDIR",
+    "PATHEXT",
+    "COMSPEC",
+    "USERPROFILE",
+]);
+/**
+ * The child's environment: the allow-listed variables from `parent` (when set), then `extra` (literal
+ * values from the config) on top. Nothing else.
+ */
+function minimalEnvironment(parent, extra = {}) {
+    const env = {};
+    for (const name of PASSED_VARIABLES) {
+        const value = parent[name];
+        if (value !== undefined)
+            env[name] = value;
+    }
+    for (const [name, value] of Object.entries(extra))
+        env[name] = value;
+    return env;
+}
+
+
+/***/ }),
+
 /***/ 6902:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
@@ -8681,7 +9022,7 @@ function firstLine(err) {
 
 /***/ }),
 
-/***/ 9745:
+/***/ 3065:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -8700,54 +9041,8 @@ var _2020 = __nccwpck_require__(2210);
 var version = __nccwpck_require__(6063);
 // EXTERNAL MODULE: ./build/package/adapters/child.js
 var child = __nccwpck_require__(5742);
-;// CONCATENATED MODULE: ./build/package/adapters/env.js
-/**
- * The environment an optimizer process gets: an allow-list, never the harness's own environment.
- *
- * The optimizer under test is untrusted code (a pull request can change it), while the harness may run
- * with a GitHub token and other secrets in its environment (GITHUB_TOKEN, INPUT_*, ACTIONS_*). So the
- * child receives only the variables named here, copied from the harness when set, plus the literal
- * values the config gives under `adapters.NAME.env`. A deny-list would leak every secret nobody
- * thought of; an allow-list leaks none by construction.
- */
-/**
- * Variables copied from the harness's environment when set: what programs need to find executables,
- * a home directory, the locale, the time zone and a temporary directory (and their Windows spellings).
- */
-const PASSED_VARIABLES = Object.freeze([
-    "PATH",
-    "HOME",
-    "LANG",
-    "LANGUAGE",
-    "LC_ALL",
-    "LC_CTYPE",
-    "LC_NUMERIC",
-    "TZ",
-    "TMPDIR",
-    "TEMP",
-    "TMP",
-    "SYSTEMROOT",
-    "WINDIR",
-    "PATHEXT",
-    "COMSPEC",
-    "USERPROFILE",
-]);
-/**
- * The child's environment: the allow-listed variables from `parent` (when set), then `extra` (literal
- * values from the config) on top. Nothing else.
- */
-function minimalEnvironment(parent, extra = {}) {
-    const env = {};
-    for (const name of PASSED_VARIABLES) {
-        const value = parent[name];
-        if (value !== undefined)
-            env[name] = value;
-    }
-    for (const [name, value] of Object.entries(extra))
-        env[name] = value;
-    return env;
-}
-
+// EXTERNAL MODULE: ./build/package/adapters/env.js
+var env = __nccwpck_require__(2387);
 // EXTERNAL MODULE: ./build/package/core/rng.js
 var rng = __nccwpck_require__(2906);
 // EXTERNAL MODULE: ./build/package/runner/recorder.js
@@ -9366,7 +9661,7 @@ class ProcessSession {
         const link = new child/* ChildLink */.rl({
             command: s.command,
             cwd: s.cwd,
-            env: minimalEnvironment(this.options.parentEnv ?? process.env, s.env),
+            env: (0,env/* minimalEnvironment */.n)(this.options.parentEnv ?? process.env, s.env),
             maxLineBytes: s.maxMessageBytes,
             label: this.label,
         });
@@ -13092,7 +13387,7 @@ function createProblem(name, params, ctx) {
 /* harmony export */   A: () => (/* binding */ RunBatch)
 /* harmony export */ });
 /* harmony import */ var _problems_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5006);
-/* harmony import */ var _adapters_session_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(9745);
+/* harmony import */ var _adapters_session_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3065);
 /* harmony import */ var _execute_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(5585);
 /* harmony import */ var _resolve_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(5966);
 /* harmony import */ var _scenarios_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(8857);
@@ -13411,25 +13706,17 @@ function message(err) {
 
 /***/ }),
 
-/***/ 6460:
+/***/ 9442:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  o: () => (/* binding */ runSuite),
-  H: () => (/* binding */ setWorkerEntry)
-});
-
-;// CONCATENATED MODULE: external "node:module"
-const external_node_module_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:module");
-// EXTERNAL MODULE: external "node:url"
-var external_node_url_ = __nccwpck_require__(3136);
-// EXTERNAL MODULE: external "node:worker_threads"
-var external_node_worker_threads_ = __nccwpck_require__(5919);
-// EXTERNAL MODULE: ./build/package/runner/batch.js
-var runner_batch = __nccwpck_require__(8550);
-;// CONCATENATED MODULE: ./build/package/runner/pool.js
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   H: () => (/* binding */ setWorkerEntry),
+/* harmony export */   o: () => (/* binding */ runSuite)
+/* harmony export */ });
+/* harmony import */ var node_module__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8995);
+/* harmony import */ var node_url__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3136);
+/* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(5919);
+/* harmony import */ var _batch_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(8550);
 /**
  * Runs a whole suite, in this thread or on worker threads. Items are handed out in chunks from one
  * queue (so a slow case does not hold up a worker's share) and put back in item order, so the results
@@ -13452,7 +13739,7 @@ function defaultWorkerEntry() {
     // Sources (development, tests) run through tsx: register its loader in the worker, then load worker.ts.
     const target = JSON.stringify(new URL("./worker.ts", here).href);
     // Resolved from this file, not from the working directory, so sources run from anywhere.
-    const tsx = JSON.stringify((0,external_node_url_.pathToFileURL)((0,external_node_module_namespaceObject.createRequire)(here)
+    const tsx = JSON.stringify((0,node_url__WEBPACK_IMPORTED_MODULE_1__.pathToFileURL)((0,node_module__WEBPACK_IMPORTED_MODULE_0__.createRequire)(here)
         .resolve("tsx/esm/api")
         .replace(/\.cjs$/, ".mjs")).href);
     return {
@@ -13462,7 +13749,7 @@ function defaultWorkerEntry() {
     };
 }
 async function runSuite(suite, options = {}) {
-    const batch = new runner_batch/* RunBatch */.A(suite);
+    const batch = new _batch_js__WEBPACK_IMPORTED_MODULE_3__/* .RunBatch */ .A(suite);
     const items = options.items ?? Array.from({ length: batch.size }, (_, i) => i);
     const metrics = new Map();
     const workers = Math.max(1, Math.min(options.workers ?? 1, items.length));
@@ -13508,7 +13795,7 @@ async function runOnWorkers(suite, items, count, metrics, progress) {
             reject(err);
         };
         for (let w = 0; w < count; w++) {
-            const worker = new external_node_worker_threads_.Worker(entry.script, { eval: entry.eval, workerData: { ...entry.data, suite } });
+            const worker = new node_worker_threads__WEBPACK_IMPORTED_MODULE_2__.Worker(entry.script, { eval: entry.eval, workerData: { ...entry.data, suite } });
             pool.push(worker);
             const feed = () => {
                 if (next < chunks.length) {
@@ -14306,30 +14593,49 @@ var __webpack_exports__ = {};
 
 // EXTERNAL MODULE: external "node:worker_threads"
 var external_node_worker_threads_ = __nccwpck_require__(5919);
-// EXTERNAL MODULE: ./build/package/runner/pool.js + 1 modules
-var pool = __nccwpck_require__(6460);
+// EXTERNAL MODULE: ./build/package/runner/pool.js
+var pool = __nccwpck_require__(9442);
+// EXTERNAL MODULE: ./build/package/action/engine-marker.js
+var engine_marker = __nccwpck_require__(6645);
+// EXTERNAL MODULE: ./build/package/action/engine-process.js
+var engine_process = __nccwpck_require__(6142);
 ;// CONCATENATED MODULE: ./build/package/action/worker-marker.js
 /** The key in workerData that marks a worker thread started from the bundle (see src/action/main.ts). */
 const WORKER_MARKER = "gradgateWorker";
 
 ;// CONCATENATED MODULE: ./build/package/action/main.js
 /**
- * Entry file of the Action (bundled into dist/index.js). In the main thread it only calls `run()`. The
- * bundle is also the worker-thread script: the runner's worker pool starts workers from this very file
- * with a marker in workerData, and those load the runner's worker code instead. (No top-level await:
- * the bundler reads this file as a script.)
+ * Entry file of the Action (bundled into dist/index.js). It is three programs in one file, told apart by a
+ * marker:
+ * - a worker thread marked in workerData: the runner's worker code (the pool starts workers from this
+ *   very file when it is a bundle);
+ * - a process started with ENGINE_MARKER set: the engine process, which runs the CLI on its arguments and
+ *   with it the optimizer code, without the token (see ./engine-process.ts);
+ * - otherwise the Action itself: it only calls `run()`.
+ * (No top-level await: the bundler reads this file as a script.)
  */
 
 
 
+
+
 const marked = !external_node_worker_threads_.isMainThread && external_node_worker_threads_.workerData?.[WORKER_MARKER] === true;
+// Only a compiled file (plain .js) can start workers and the engine from itself; from the sources the
+// pool uses runner/worker.ts and the engine starts main.ts through tsx.
+const compiled = import.meta.url.endsWith(".js");
 if (marked) {
     void __nccwpck_require__.e(/* import() */ 410).then(__nccwpck_require__.bind(__nccwpck_require__, 6410));
 }
 else {
-    // Only a bundle (plain .js) can start workers from itself; from the sources the pool uses runner/worker.ts.
-    if (import.meta.url.endsWith(".js"))
+    if (compiled)
         (0,pool/* setWorkerEntry */.H)(new URL(import.meta.url), { [WORKER_MARKER]: true });
-    void Promise.all(/* import() */[__nccwpck_require__.e(511), __nccwpck_require__.e(994)]).then(__nccwpck_require__.bind(__nccwpck_require__, 7994)).then(({ run }) => run());
+    if (process.env[engine_marker/* ENGINE_MARKER */.q] === "1") {
+        void Promise.all(/* import() */[__nccwpck_require__.e(815), __nccwpck_require__.e(846), __nccwpck_require__.e(704)]).then(__nccwpck_require__.bind(__nccwpck_require__, 8704)).then(({ engineMain }) => engineMain(process.argv.slice(2)));
+    }
+    else {
+        if (compiled)
+            (0,engine_process/* setEngineEntry */.NV)(new URL(import.meta.url));
+        void Promise.all(/* import() */[__nccwpck_require__.e(421), __nccwpck_require__.e(846), __nccwpck_require__.e(995)]).then(__nccwpck_require__.bind(__nccwpck_require__, 6376)).then(({ run }) => run());
+    }
 }
 

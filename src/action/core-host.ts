@@ -1,4 +1,5 @@
 /** The ActionHost of a real workflow run: @actions/core (log commands, GITHUB_OUTPUT, GITHUB_STEP_SUMMARY). */
+import { randomUUID } from "node:crypto";
 import * as core from "@actions/core";
 import type { ActionHost } from "./host.js";
 
@@ -15,5 +16,15 @@ export function coreHost(): ActionHost {
     },
     fail: (m) => core.setFailed(m),
     group: (name, fn) => core.group(name, fn),
+    withoutCommands: async (fn) => {
+      // The runner's "stop-commands" command: nothing is a command until the unguessable end token.
+      const token = randomUUID();
+      core.info(`::stop-commands::${token}`);
+      try {
+        return await fn();
+      } finally {
+        core.info(`::${token}::`);
+      }
+    },
   };
 }

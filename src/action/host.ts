@@ -17,4 +17,9 @@ export interface ActionHost {
   fail(message: string): void;
   /** Runs `fn` inside a collapsible log group. */
   group<T>(name: string, fn: () => Promise<T>): Promise<T>;
+  /**
+   * Runs `fn` with workflow commands switched off: lines logged meanwhile (the engine process's output,
+   * which optimizer code can write to) are shown as text, never read as commands.
+   */
+  withoutCommands<T>(fn: () => Promise<T>): Promise<T>;
 }

@@ -5,20 +5,23 @@
  * - merge: combine shard results, compare, report;
  * - publish: report a verdict file made by another job (no optimizer code runs here);
  * - rebaseline: run the suite and write new baselines with an audit entry.
+ *
+ * Every CLI command that can load code of the repository (run; compare, with its extra-seed re-runs and
+ * reference checks; rebaseline, with its extra seeds) runs in the engine process (./engine-process.ts),
+ * never in this one, which holds the token. This process merges shard files, reads the documents the
+ * engine wrote, reports, and talks to the GitHub API.
  */
 import { existsSync } from "node:fs";
 import { resolve } from "node:path";
+import { EXIT } from "../cli/host.js";
 import { InputError } from "../core/errors.js";
 import { canonicalJson } from "../core/json.js";
 import { writeFileAtomic } from "../io/files.js";
-import { compareCommand } from "../cli/compare-command.js";
 import { readAndMerge } from "../cli/merge-command.js";
-import { rebaselineCommand } from "../cli/rebaseline-command.js";
-import { runCommand } from "../cli/run-command.js";
 import { readAuditLog } from "../baselines/store.js";
 import { mdCode, mdText } from "../report/escape.js";
 import type { CaseRuns } from "../report/model.js";
-import { cliHostFor } from "./cli-host.js";
+import type { ShardSpec } from "../runner/shard.js";
 import {
   handoffPath,
   readBaselineRuns,
@@ -27,6 +30,7 @@ import {
   readVerdict,
   type Handoff,
 } from "./documents.js";
+import { runEngine, type EngineCommand } from "./engine-process.js";
 import type { RunContext } from "./event.js";
 import { ApiError, GitHubApi } from "./github-api.js";
 import type { ActionHost } from "./host.js";
@@ -59,15 +63,31 @@ export async function runMode(m: ModeContext): Promise<void> {
   }
 }
 
-async function runSuite(m: ModeContext, shard = m.settings.shard): Promise<void> {
+/** Runs one CLI command in the engine process, with the token kept out of its reach. */
+function engine(m: ModeContext, command: EngineCommand): Promise<number> {
+  return runEngine({ host: m.host, cwd: m.cwd, secrets: [m.settings.token] }, command);
+}
+
+/** The options every engine command shares: the config (when given) and the workers (unless auto). */
+function suiteOptions(s: Settings): string[] {
+  return [
+    ...(s.config !== undefined ? [`--config=${s.config}`] : []),
+    ...(s.workers !== undefined ? [`--workers=${s.workers}`] : []),
+  ];
+}
+
+async function runSuite(m: ModeContext, shard: ShardSpec | undefined = m.settings.shard): Promise<void> {
   const { settings: s } = m;
   await m.host.group(shard ? `Run shard ${shard.index}/${shard.count} of the suite` : "Run the suite", () =>
-    runCommand(cliHostFor(m.host, m.cwd), {
-      config: s.config,
-      out: s.resultsFile,
-      workers: s.workers,
-      quiet: false,
-      shard,
+    engine(m, {
+      argv: [
+        "run",
+        `--out=${s.resultsFile}`,
+        ...suiteOptions(s),
+        ...(shard ? [`--shard=${shard.index}/${shard.count}`] : []),
+      ],
+      codes: [EXIT.ok],
+      writes: s.resultsFile,
     }),
   );
   m.host.setOutput(OUTPUT.resultsFile, s.resultsFile);
@@ -100,18 +120,25 @@ async function merge(m: ModeContext): Promise<void> {
 /** Compare the results file with the baselines, write the verdict file, report, and fail the step if asked. */
 async function judge(m: ModeContext): Promise<void> {
   const { settings: s, context, host } = m;
-  await host.group("Compare with the baselines", () =>
-    compareCommand(cliHostFor(host, m.cwd), {
-      results: s.resultsFile,
-      baselines: s.baselines,
-      json: s.verdictFile,
-      config: s.config,
-      extraSeeds: true,
-      workers: s.workers,
-      quiet: false,
+  const code = await host.group("Compare with the baselines", () =>
+    engine(m, {
+      argv: [
+        "compare",
+        `--results=${s.resultsFile}`,
+        `--baselines=${s.baselines}`,
+        `--json=${s.verdictFile}`,
+        ...suiteOptions(s),
+      ],
+      codes: [EXIT.ok, EXIT.fail],
+      writes: s.verdictFile,
     }),
   );
   const verdict = readVerdict(m.cwd, s.verdictFile);
+  if ((code === EXIT.ok) !== (verdict.gate.verdict === "pass")) {
+    throw new Error(
+      `the engine process's exit code ${code} disagrees with the gate verdict "${verdict.gate.verdict}" in ${s.verdictFile}`,
+    );
+  }
   const results = readResultsDoc(m.cwd, s.resultsFile);
   const pr = context.pullRequest;
   if (pr && /^[0-9a-f]{40}$/.test(pr.headSha)) {
@@ -220,15 +247,17 @@ async function rebaseline(m: ModeContext): Promise<void> {
   await runSuite(m, undefined);
   const before = readAuditLog(resolve(m.cwd, s.baselines), s.baselines).length;
   await host.group("Write the baselines", () =>
-    rebaselineCommand(cliHostFor(host, m.cwd), {
-      results: s.resultsFile,
-      reason,
-      baselines: s.baselines,
-      commit: /^[0-9a-f]{40}$/.test(context.sha) ? context.sha : undefined,
-      allowSuiteChange: s.allowSuiteChange,
-      config: s.config,
-      workers: s.workers,
-      quiet: false,
+    engine(m, {
+      argv: [
+        "rebaseline",
+        `--results=${s.resultsFile}`,
+        `--reason=${reason}`,
+        `--baselines=${s.baselines}`,
+        ...(/^[0-9a-f]{40}$/.test(context.sha) ? [`--commit=${context.sha}`] : []),
+        ...(s.allowSuiteChange ? ["--allow-suite-change"] : []),
+        ...suiteOptions(s),
+      ],
+      codes: [EXIT.ok],
     }),
   );
   const log = readAuditLog(resolve(m.cwd, s.baselines), s.baselines);

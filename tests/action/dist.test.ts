@@ -10,8 +10,10 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { CREDENTIAL_VARIABLES } from "../../src/action/engine-env.js";
 import { runCommand } from "../../src/cli/run-command.js";
 import { FakeGitHub } from "./fake-github.js";
+import { readSpy, writeSpyProject } from "./spy-optimizer.js";
 import { HEAD_A, makeProject, pullRequestEvent, readOutputs, runnerEnv } from "./workflow.js";
 
 const bundle = fileURLToPath(new URL("../../dist/index.js", import.meta.url));
@@ -29,7 +31,18 @@ afterAll(async () => {
 });
 beforeEach(() => gh.reset());
 
+/** The credentials of the step; none may reach the optimizer. */
+const SECRETS = {
+  GITHUB_TOKEN: "ghs_job_token",
+  ACTIONS_RUNTIME_TOKEN: "runtime_secret",
+  INPUT_TOKEN: "ghs_input_token",
+  // A secret the workflow put under `env:` for the whole job, under a name nobody listed.
+  DEPLOY_KEY: "deploy_secret",
+};
+
 interface StepResult {
+  /** The process id of the Action (the process that talks to the API). */
+  readonly pid: number;
   readonly code: number | null;
   readonly stdout: string;
   readonly outputs: Record<string, string>;
@@ -53,9 +66,7 @@ function step(
     ...runnerEnv(dir, gh.url, event, payload),
     GITHUB_STEP_SUMMARY: summary,
     GITHUB_OUTPUT: output,
-    GITHUB_TOKEN: "ghs_job_token",
-    ACTIONS_RUNTIME_TOKEN: "runtime_secret",
-    INPUT_TOKEN: "ghs_input_token",
+    ...SECRETS,
   };
   for (const [name, value] of Object.entries(inputs)) env[`INPUT_${name.toUpperCase()}`] = value;
   return new Promise((resolve, reject) => {
@@ -67,7 +78,13 @@ function step(
     child.on("error", reject);
     child.on("close", (code) => {
       clearTimeout(timer);
-      resolve({ code, stdout, outputs: readOutputs(output), summary: readFileSync(summary, "utf8") });
+      resolve({
+        pid: child.pid!,
+        code,
+        stdout,
+        outputs: readOutputs(output),
+        summary: readFileSync(summary, "utf8"),
+      });
     });
   });
 }
@@ -96,41 +113,49 @@ describe("dist/index.js", () => {
     expect(gh.requests.every((q) => q.auth === "Bearer ghs_input_token")).toBe(true);
   });
 
-  it("loads an optimizer module of the repository on worker threads, without the credentials in its environment", async () => {
-    const dir = join(root, "module");
-    cpSync(project, dir, { recursive: true, filter: (src) => !src.includes(".gradgate") });
-    // Untrusted code of the repository: plain gradient descent that also writes down what it can see.
-    writeFileSync(
-      join(dir, "my-sgd.mjs"),
-      `import { appendFileSync } from "node:fs";
-const seen = Object.keys(process.env).filter((k) => /TOKEN|SECRET|ACTIONS_/.test(k) || k === "INPUT_TOKEN");
-appendFileSync(new URL("./seen.txt", import.meta.url), JSON.stringify(seen) + "\\n");
-export const mySgd = {
-  name: "my-sgd",
-  title: "gradient descent (test module)",
-  defaults: { lr: 0.01 },
-  create(hyper, dim) {
-    const g = new Float64Array(dim);
-    return { step(x, oracle) { oracle.evaluate(x, g); for (let i = 0; i < dim; i++) x[i] -= hyper.lr * g[i]; } };
-  },
-};
-`,
-    );
-    writeFileSync(
-      join(dir, "modules.yml"),
-      readFileSync(join(dir, "gradgate.yml"), "utf8").replace(
-        "    use: sgd\n",
-        "    use: module:./my-sgd.mjs#mySgd\n",
-      ),
-    );
-    const r = await step(dir, "push", {}, { config: "modules.yml", workers: "2" });
-    expect(r.code, r.stdout).toBe(0);
-    const seen = readFileSync(join(dir, "seen.txt"), "utf8").trim().split("\n");
-    expect(seen.length).toBeGreaterThanOrEqual(2); // the main thread and at least one worker loaded it
-    for (const line of seen) expect(JSON.parse(line)).toEqual([]);
-    // The same module in place of the reference SGD gives the reference SGD's numbers: unchanged.
-    expect(r.outputs.verdict).toBe("pass");
-  });
+  it.each([1, 2])(
+    "workers %i: runs the repository's optimizer module in an engine process without credentials; the Action alone comments",
+    async (workers) => {
+      const dir = join(root, `spy-${workers}`);
+      cpSync(project, dir, { recursive: true, filter: (src) => !src.includes(".gradgate") });
+      // Untrusted code of the repository: gradient descent that writes down its process, its environment
+      // and every request sent from its threads (tests/action/spy-optimizer.ts).
+      const config = writeSpyProject(dir, "gradgate.yml", true);
+      const r = await step(dir, "pull_request", pullRequestEvent(7, HEAD_A), {
+        config,
+        workers: String(workers),
+      });
+      expect(r.code, r.stdout).toBe(0);
+      // The same module in place of the reference SGD gives the reference SGD's numbers: unchanged.
+      expect(r.outputs.verdict).toBe("pass");
+      expect(gh.writes().map((w) => `${w.method} ${w.path} ${w.auth}`)).toEqual([
+        `POST /repos/lumen-labs/lumen/issues/7/comments Bearer ${SECRETS.INPUT_TOKEN}`,
+      ]);
+
+      const spy = readSpy(dir);
+      // Loaded by `run` and by `compare` (its reference check): two engine processes started by the Action.
+      expect(new Set(spy.filter((s) => s.kind === "loaded").map((s) => s.pid)).size).toBe(2);
+      for (const s of spy) {
+        expect(s.pid).not.toBe(r.pid);
+        expect(s.ppid).toBe(r.pid);
+      }
+      const steps = spy.filter((s) => s.kind === "step");
+      expect(steps.length).toBeGreaterThanOrEqual(1);
+      for (const s of steps) expect(s.threadId === 0).toBe(workers === 1);
+      for (const s of spy.filter((x) => x.kind === "loaded")) {
+        expect(s.env!.GITHUB_WORKSPACE).toBe(dir);
+        expect(s.env!.HOME).toBe(dir);
+        for (const name of Object.keys(s.env!)) expect(name).not.toMatch(/^(INPUT_|ACTIONS_)/);
+        for (const name of [...CREDENTIAL_VARIABLES, "DEPLOY_KEY"])
+          expect(s.env![name], name).toBeUndefined();
+        const seen = JSON.stringify([s.env, s.argv, s.execArgv]);
+        for (const secret of Object.values(SECRETS)) expect(seen).not.toContain(secret);
+        // Started from the bundle itself.
+        expect(s.argv![1]).toBe(bundle);
+      }
+      expect(spy.filter((s) => s.kind === "request")).toEqual([]);
+    },
+  );
 
   it("fails with one message and exit code 1 on bad input", async () => {
     const r = await step(project, "push", {}, { workers: "lots" });
