@@ -87,7 +87,8 @@ async function runOnWorkers(
   progress: (done: number, total: number) => void,
 ): Promise<void> {
   const entry = workerEntry ?? defaultWorkerEntry();
-  const chunkSize = Math.max(1, Math.min(32, Math.ceil(items.length / (count * 8))));
+  // Small chunks from one queue: the slowest cases cannot leave one worker busy long after the others.
+  const chunkSize = Math.max(1, Math.min(8, Math.ceil(items.length / (count * 32))));
   const chunks: number[][] = [];
   for (let i = 0; i < items.length; i += chunkSize) chunks.push(items.slice(i, i + chunkSize));
   let next = 0;
