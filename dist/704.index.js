@@ -1278,7 +1278,7 @@ async function runCommand(host, args) {
     }
     const started = performance.now();
     let lastDraw = 0;
-    const cases = await (0,pool/* runSuite */.o)(suite, {
+    const cases = await (0,pool/* runSuite */.og)(suite, {
         workers,
         items,
         onProgress: (done, total) => {
@@ -6520,7 +6520,7 @@ async function runPlannedSeeds(results, plan, workers, adapters) {
         return new Map();
     const specs = new Map(results.cases.map((c) => [c.case.id, c.case]));
     const { suite, items } = extraSeedSuite(results.suite.seed, specs, plan, adapters);
-    const cases = await (0,pool/* runSuite */.o)(suite, { workers: workers ?? Math.min((0,external_node_os_.availableParallelism)(), 8), items });
+    const cases = await (0,pool/* runSuite */.og)(suite, { workers: workers ?? Math.min((0,external_node_os_.availableParallelism)(), 8), items });
     return extraRunsById(cases);
 }
 function readResults(host, file) {

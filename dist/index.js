@@ -13710,9 +13710,10 @@ function message(err) {
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   H: () => (/* binding */ setWorkerEntry),
-/* harmony export */   o: () => (/* binding */ runSuite)
+/* harmony export */   HU: () => (/* binding */ setWorkerEntry),
+/* harmony export */   og: () => (/* binding */ runSuite)
 /* harmony export */ });
+/* unused harmony export SuitePool */
 /* harmony import */ var node_module__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8995);
 /* harmony import */ var node_url__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3136);
 /* harmony import */ var node_worker_threads__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(5919);
@@ -13768,67 +13769,120 @@ async function runSuite(suite, options = {}) {
         finally {
             await batch.close();
         }
+        return assemble(suite, batch, items, metrics);
     }
-    else {
-        await runOnWorkers(suite, items, workers, metrics, progress);
+    const pool = new SuitePool(suite, workers);
+    try {
+        return await pool.run(items, progress);
     }
-    return assemble(suite, batch, items, metrics);
+    finally {
+        await pool.close();
+    }
 }
-async function runOnWorkers(suite, items, count, metrics, progress) {
-    const entry = workerEntry ?? defaultWorkerEntry();
-    // Small chunks from one queue: the slowest cases cannot leave one worker busy long after the others.
-    const chunkSize = Math.max(1, Math.min(8, Math.ceil(items.length / (count * 32))));
-    const chunks = [];
-    for (let i = 0; i < items.length; i += chunkSize)
-        chunks.push(items.slice(i, i + chunkSize));
-    let next = 0;
-    let done = 0;
-    await new Promise((resolve, reject) => {
-        let live = count;
-        let failed = false;
-        const pool = [];
-        const fail = (err) => {
-            if (failed)
-                return;
-            failed = true;
-            for (const w of pool)
-                void w.terminate();
-            reject(err);
-        };
+/**
+ * Worker threads bound to one suite. They stay up between runs, so a later run (extra seeds, a
+ * benchmark's second pass) finds their code already compiled; `close` ends them. Items are handed out
+ * in small chunks from one queue, one job at a time.
+ */
+class SuitePool {
+    suite;
+    workers = [];
+    exits = [];
+    job = null;
+    failure = null;
+    closing = false;
+    constructor(suite, count) {
+        this.suite = suite;
+        const entry = workerEntry ?? defaultWorkerEntry();
         for (let w = 0; w < count; w++) {
             const worker = new node_worker_threads__WEBPACK_IMPORTED_MODULE_2__.Worker(entry.script, { eval: entry.eval, workerData: { ...entry.data, suite } });
-            pool.push(worker);
-            const feed = () => {
-                if (next < chunks.length) {
-                    const id = next++;
-                    worker.postMessage({ type: "chunk", id, items: chunks[id] });
-                }
-                else {
-                    worker.postMessage({ type: "close" });
-                }
-            };
-            worker.on("message", (msg) => {
-                if (msg.type === "failed")
-                    return fail(new Error(`worker failed: ${msg.error}`));
-                const chunk = chunks[msg.id];
-                chunk.forEach((item, j) => metrics.set(item, msg.metrics[j]));
-                done += chunk.length;
-                progress(done, items.length);
-                feed();
-            });
-            worker.on("error", (err) => fail(err));
-            worker.on("exit", () => {
-                live--;
-                if (live === 0 && !failed) {
-                    if (metrics.size === items.length)
-                        resolve();
-                    else
-                        fail(new Error(`workers exited with ${items.length - metrics.size} runs unfinished`));
-                }
-            });
-            feed();
+            worker.on("message", (msg) => this.onMessage(worker, msg));
+            worker.on("error", (err) => this.fail(err));
+            this.exits.push(new Promise((resolve) => worker.on("exit", () => {
+                if (!this.closing)
+                    this.fail(new Error("a worker thread exited while runs were unfinished"));
+                resolve();
+            })));
+            this.workers.push(worker);
         }
-    });
+    }
+    /** Runs `items` (indices into the flat run list) and returns their results in case order. */
+    run(items, onProgress = () => { }) {
+        if (this.failure)
+            return Promise.reject(this.failure);
+        if (this.job !== null)
+            return Promise.reject(new Error("SuitePool runs one job at a time"));
+        // Small chunks: the slowest cases cannot leave one worker busy long after the others.
+        const size = Math.max(1, Math.min(8, Math.ceil(items.length / (this.workers.length * 32))));
+        const chunks = [];
+        for (let i = 0; i < items.length; i += size)
+            chunks.push(items.slice(i, i + size));
+        const batch = new _batch_js__WEBPACK_IMPORTED_MODULE_3__/* .RunBatch */ .A(this.suite);
+        return new Promise((resolve, reject) => {
+            const job = {
+                chunks,
+                next: 0,
+                busy: 0,
+                done: 0,
+                total: items.length,
+                metrics: new Map(),
+                progress: onProgress,
+                resolve,
+                reject,
+            };
+            this.job = job;
+            if (chunks.length === 0) {
+                this.job = null;
+                resolve(job.metrics);
+                return;
+            }
+            for (const w of this.workers)
+                this.feed(w, job);
+        }).then((metrics) => assemble(this.suite, batch, items, metrics));
+    }
+    /** Ends the worker threads (after their optimizer processes). */
+    async close() {
+        this.closing = true;
+        for (const w of this.workers)
+            w.postMessage({ type: "close" });
+        await Promise.all(this.exits);
+    }
+    feed(worker, job) {
+        if (job.next >= job.chunks.length)
+            return;
+        const id = job.next++;
+        job.busy++;
+        worker.postMessage({ type: "chunk", id, items: job.chunks[id] });
+    }
+    onMessage(worker, msg) {
+        const job = this.job;
+        if (job === null)
+            return;
+        if (msg.type === "failed")
+            return this.fail(new Error(`worker failed: ${msg.error}`));
+        job.busy--;
+        const chunk = job.chunks[msg.id];
+        chunk.forEach((item, j) => job.metrics.set(item, msg.metrics[j]));
+        job.done += chunk.length;
+        job.progress(job.done, job.total);
+        if (job.next < job.chunks.length)
+            this.feed(worker, job);
+        else if (job.busy === 0) {
+            this.job = null;
+            job.resolve(job.metrics);
+        }
+    }
+    fail(err) {
+        if (this.failure !== null || this.closing)
+            return;
+        this.failure = err;
+        this.closing = true;
+        for (const w of this.workers)
+            void w.terminate();
+        const job = this.job;
+        this.job = null;
+        job?.reject(err);
+    }
 }
 function assemble(suite, batch, items, metrics) {
     const byCase = new Map();
@@ -14629,7 +14683,7 @@ if (marked) {
 }
 else {
     if (compiled)
-        (0,pool/* setWorkerEntry */.H)(new URL(import.meta.url), { [WORKER_MARKER]: true });
+        (0,pool/* setWorkerEntry */.HU)(new URL(import.meta.url), { [WORKER_MARKER]: true });
     if (process.env[engine_marker/* ENGINE_MARKER */.q] === "1") {
         void Promise.all(/* import() */[__nccwpck_require__.e(815), __nccwpck_require__.e(846), __nccwpck_require__.e(704)]).then(__nccwpck_require__.bind(__nccwpck_require__, 8704)).then(({ engineMain }) => engineMain(process.argv.slice(2)));
     }

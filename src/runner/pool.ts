@@ -73,67 +73,141 @@ export async function runSuite(suite: SuiteSpec, options: RunSuiteOptions = {}):
     } finally {
       await batch.close();
     }
-  } else {
-    await runOnWorkers(suite, items, workers, metrics, progress);
+    return assemble(suite, batch, items, metrics);
   }
-  return assemble(suite, batch, items, metrics);
+  const pool = new SuitePool(suite, workers);
+  try {
+    return await pool.run(items, progress);
+  } finally {
+    await pool.close();
+  }
 }
 
-async function runOnWorkers(
-  suite: SuiteSpec,
-  items: readonly number[],
-  count: number,
-  metrics: Map<number, RunMetrics>,
-  progress: (done: number, total: number) => void,
-): Promise<void> {
-  const entry = workerEntry ?? defaultWorkerEntry();
-  // Small chunks from one queue: the slowest cases cannot leave one worker busy long after the others.
-  const chunkSize = Math.max(1, Math.min(8, Math.ceil(items.length / (count * 32))));
-  const chunks: number[][] = [];
-  for (let i = 0; i < items.length; i += chunkSize) chunks.push(items.slice(i, i + chunkSize));
-  let next = 0;
-  let done = 0;
+interface Job {
+  readonly chunks: readonly (readonly number[])[];
+  next: number;
+  busy: number;
+  done: number;
+  readonly total: number;
+  readonly metrics: Map<number, RunMetrics>;
+  readonly progress: (done: number, total: number) => void;
+  readonly resolve: (metrics: Map<number, RunMetrics>) => void;
+  readonly reject: (err: Error) => void;
+}
 
-  await new Promise<void>((resolve, reject) => {
-    let live = count;
-    let failed = false;
-    const pool: Worker[] = [];
-    const fail = (err: Error) => {
-      if (failed) return;
-      failed = true;
-      for (const w of pool) void w.terminate();
-      reject(err);
-    };
+/**
+ * Worker threads bound to one suite. They stay up between runs, so a later run (extra seeds, a
+ * benchmark's second pass) finds their code already compiled; `close` ends them. Items are handed out
+ * in small chunks from one queue, one job at a time.
+ */
+export class SuitePool {
+  private readonly workers: Worker[] = [];
+  private readonly exits: Promise<void>[] = [];
+  private job: Job | null = null;
+  private failure: Error | null = null;
+  private closing = false;
+
+  constructor(
+    private readonly suite: SuiteSpec,
+    count: number,
+  ) {
+    const entry = workerEntry ?? defaultWorkerEntry();
     for (let w = 0; w < count; w++) {
       const worker = new Worker(entry.script, { eval: entry.eval, workerData: { ...entry.data, suite } });
-      pool.push(worker);
-      const feed = () => {
-        if (next < chunks.length) {
-          const id = next++;
-          worker.postMessage({ type: "chunk", id, items: chunks[id] });
-        } else {
-          worker.postMessage({ type: "close" });
-        }
-      };
-      worker.on("message", (msg: { type: string; id: number; metrics?: RunMetrics[]; error?: string }) => {
-        if (msg.type === "failed") return fail(new Error(`worker failed: ${msg.error}`));
-        const chunk = chunks[msg.id];
-        chunk.forEach((item, j) => metrics.set(item, msg.metrics![j]));
-        done += chunk.length;
-        progress(done, items.length);
-        feed();
-      });
-      worker.on("error", (err) => fail(err));
-      worker.on("exit", () => {
-        live--;
-        if (live === 0 && !failed) {
-          if (metrics.size === items.length) resolve();
-          else fail(new Error(`workers exited with ${items.length - metrics.size} runs unfinished`));
-        }
-      });
-      feed();
+      worker.on("message", (msg: WorkerReply) => this.onMessage(worker, msg));
+      worker.on("error", (err) => this.fail(err));
+      this.exits.push(
+        new Promise((resolve) =>
+          worker.on("exit", () => {
+            if (!this.closing) this.fail(new Error("a worker thread exited while runs were unfinished"));
+            resolve();
+          }),
+        ),
+      );
+      this.workers.push(worker);
     }
-  });
+  }
+
+  /** Runs `items` (indices into the flat run list) and returns their results in case order. */
+  run(
+    items: readonly number[],
+    onProgress: (done: number, total: number) => void = () => {},
+  ): Promise<CaseResult[]> {
+    if (this.failure) return Promise.reject(this.failure);
+    if (this.job !== null) return Promise.reject(new Error("SuitePool runs one job at a time"));
+    // Small chunks: the slowest cases cannot leave one worker busy long after the others.
+    const size = Math.max(1, Math.min(8, Math.ceil(items.length / (this.workers.length * 32))));
+    const chunks: number[][] = [];
+    for (let i = 0; i < items.length; i += size) chunks.push(items.slice(i, i + size));
+    const batch = new RunBatch(this.suite);
+    return new Promise<Map<number, RunMetrics>>((resolve, reject) => {
+      const job: Job = {
+        chunks,
+        next: 0,
+        busy: 0,
+        done: 0,
+        total: items.length,
+        metrics: new Map(),
+        progress: onProgress,
+        resolve,
+        reject,
+      };
+      this.job = job;
+      if (chunks.length === 0) {
+        this.job = null;
+        resolve(job.metrics);
+        return;
+      }
+      for (const w of this.workers) this.feed(w, job);
+    }).then((metrics) => assemble(this.suite, batch, items, metrics));
+  }
+
+  /** Ends the worker threads (after their optimizer processes). */
+  async close(): Promise<void> {
+    this.closing = true;
+    for (const w of this.workers) w.postMessage({ type: "close" });
+    await Promise.all(this.exits);
+  }
+
+  private feed(worker: Worker, job: Job): void {
+    if (job.next >= job.chunks.length) return;
+    const id = job.next++;
+    job.busy++;
+    worker.postMessage({ type: "chunk", id, items: job.chunks[id] });
+  }
+
+  private onMessage(worker: Worker, msg: WorkerReply): void {
+    const job = this.job;
+    if (job === null) return;
+    if (msg.type === "failed") return this.fail(new Error(`worker failed: ${msg.error}`));
+    job.busy--;
+    const chunk = job.chunks[msg.id];
+    chunk.forEach((item, j) => job.metrics.set(item, msg.metrics![j]));
+    job.done += chunk.length;
+    job.progress(job.done, job.total);
+    if (job.next < job.chunks.length) this.feed(worker, job);
+    else if (job.busy === 0) {
+      this.job = null;
+      job.resolve(job.metrics);
+    }
+  }
+
+  private fail(err: Error): void {
+    if (this.failure !== null || this.closing) return;
+    this.failure = err;
+    this.closing = true;
+    for (const w of this.workers) void w.terminate();
+    const job = this.job;
+    this.job = null;
+    job?.reject(err);
+  }
+}
+
+interface WorkerReply {
+  readonly type: "done" | "failed";
+  readonly id: number;
+  readonly metrics?: RunMetrics[];
+  readonly error?: string;
 }
 
 function assemble(
