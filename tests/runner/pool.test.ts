@@ -37,7 +37,7 @@ describe("runSuite", () => {
     const whole = resolveSuite(parseConfig(CONFIG, "pool.yml"), "pool.yml");
     const alone = resolveSuite(
       parseConfig(
-        CONFIG.replace("  - use: rosenbrock\n", "").replace(/  - name: momentum\n.*\n/, ""),
+        CONFIG.replace("  - use: rosenbrock\n", "").replace(/ {2}- name: momentum\n.*\n/, ""),
         "pool.yml",
       ),
       "pool.yml",
