@@ -11,6 +11,11 @@
  *     g ← ∇f(u) + λ·u
  *     v ← γ·v + η·g;   u ← u − (γ·v + η·g)        (v already updated)
  *
+ * lrPlacement "lr-outside" keeps the buffer b = v/η instead, as many frameworks write it (common
+ * practice): lookahead g ← ∇f(w − η·γ·b), b ← γ·b + g, w ← w − η·b; stored-lookahead b ← γ·b + g,
+ * u ← u − η·(g + γ·b). With a constant η it is the same trajectory; when η changes, the whole
+ * accumulated buffer is rescaled by the new η at once, as for heavy ball's "lr-outside" form.
+ *
  * (γ = momentum, η = lr, λ = weightDecay.) Both forms are the same algorithm on shifted iterates:
  * with u_k = w_k − γ·v_k, u_{k+1} = w_{k+1} − γ·v_{k+1} = u_k + γ·v_k − (1+γ)·v_{k+1}, which is the
  * second line because v_{k+1} − γ·v_k = η·g_k. Both start with v = 0, so u_0 = w_0 = the start point,
@@ -26,7 +31,7 @@
  * https://arxiv.org/abs/1212.0901; the update above is our own derivation in this file's notation.
  *
  * Hyperparameters: lr = 0.01 and momentum = 0.9 (common practice; no paper sets defaults),
- * form = "lookahead", weightDecay = 0.
+ * form = "lookahead", lrPlacement = "lr-inside", weightDecay = 0.
  * Cost per step: one gradient evaluation — at a separate look-ahead buffer in "lookahead" form (the
  * harness then measures f(x) itself), at x itself in "stored-lookahead" form; about 7·dim flops;
  * memory: gradient, velocity and (lookahead form) look-ahead buffers.
@@ -64,6 +69,15 @@ export const NESTEROV_HYPER: HyperSpecs = {
       '"stored-lookahead": the parameters hold u = w − γv and the gradient is taken there ' +
       "(Bengio, Boulanger-Lewandowski & Pascanu 2013, §3.5). Same algorithm, shifted iterates.",
   },
+  lrPlacement: {
+    type: "choice",
+    choices: ["lr-inside", "lr-outside"],
+    default: "lr-inside",
+    description:
+      '"lr-inside": v = γv + η·g, as in Sutskever et al. 2013 eq. 3–4. "lr-outside": a buffer b = γb + g with ' +
+      "steps of η·(…), as many frameworks write it (common practice); with v = η·b the same trajectory " +
+      "while η is constant, different once η changes (the whole buffer is rescaled by the new η at once).",
+  },
   weightDecay: {
     type: "number",
     minimum: 0,
@@ -72,7 +86,9 @@ export const NESTEROV_HYPER: HyperSpecs = {
   },
 };
 
-const LAYOUT: StateLayout = { step: "count", lr: "lr", velocity: "vector" };
+/** The state's vector means v = η·b with the learning rate inside, b without: different keys, no mix-up. */
+const LAYOUT_INSIDE: StateLayout = { step: "count", lr: "lr", velocity: "vector" };
+const LAYOUT_OUTSIDE: StateLayout = { step: "count", lr: "lr", buffer: "vector" };
 
 class Nesterov implements ReferenceOptimizer {
   private readonly grad: Float64Array;
@@ -83,6 +99,7 @@ class Nesterov implements ReferenceOptimizer {
   private readonly gamma: number;
   private readonly weightDecay: number;
   private readonly stored: boolean;
+  private readonly lrInside: boolean;
   private t = 0;
 
   constructor(
@@ -90,6 +107,7 @@ class Nesterov implements ReferenceOptimizer {
     private readonly dim: number,
   ) {
     this.stored = hyper.form === "stored-lookahead";
+    this.lrInside = hyper.lrPlacement !== "lr-outside";
     this.grad = new Float64Array(dim);
     this.velocity = new Float64Array(dim);
     this.ahead = new Float64Array(this.stored ? 0 : dim);
@@ -105,36 +123,59 @@ class Nesterov implements ReferenceOptimizer {
     const lr = this.lr;
     const gamma = this.gamma;
     const wd = this.weightDecay;
-    if (this.stored) {
+    if (this.lrInside) {
+      if (this.stored) {
+        oracle.evaluate(x, g);
+        for (let i = 0; i < this.dim; i++) {
+          const gi = g[i] + wd * x[i];
+          const vi = gamma * v[i] + lr * gi;
+          v[i] = vi;
+          x[i] -= gamma * vi + lr * gi;
+        }
+      } else {
+        const a = this.ahead;
+        for (let i = 0; i < this.dim; i++) a[i] = x[i] - gamma * v[i];
+        oracle.evaluate(a, g);
+        for (let i = 0; i < this.dim; i++) {
+          const vi = gamma * v[i] + lr * (g[i] + wd * a[i]);
+          v[i] = vi;
+          x[i] -= vi;
+        }
+      }
+    } else if (this.stored) {
+      // v holds the buffer b: b ← γb + g; u ← u − η·(g + γb).
       oracle.evaluate(x, g);
       for (let i = 0; i < this.dim; i++) {
         const gi = g[i] + wd * x[i];
-        const vi = gamma * v[i] + lr * gi;
-        v[i] = vi;
-        x[i] -= gamma * vi + lr * gi;
+        const bi = gamma * v[i] + gi;
+        v[i] = bi;
+        x[i] -= lr * (gi + gamma * bi);
       }
     } else {
+      // v holds the buffer b: the look-ahead point is w − η·γ·b; b ← γb + g; w ← w − η·b.
       const a = this.ahead;
-      for (let i = 0; i < this.dim; i++) a[i] = x[i] - gamma * v[i];
+      for (let i = 0; i < this.dim; i++) a[i] = x[i] - lr * gamma * v[i];
       oracle.evaluate(a, g);
       for (let i = 0; i < this.dim; i++) {
-        const vi = gamma * v[i] + lr * (g[i] + wd * a[i]);
-        v[i] = vi;
-        x[i] -= vi;
+        const bi = gamma * v[i] + (g[i] + wd * a[i]);
+        v[i] = bi;
+        x[i] -= lr * bi;
       }
     }
     this.t++;
   }
 
   exportState(): OptimizerState {
-    return { step: this.t, lr: this.lr, velocity: saveVector(this.velocity) };
+    const key = this.lrInside ? "velocity" : "buffer";
+    return { step: this.t, lr: this.lr, [key]: saveVector(this.velocity) };
   }
 
   importState(state: OptimizerState): void {
-    const s = checkState(state, LAYOUT, this.dim, "importState nesterov");
+    const layout = this.lrInside ? LAYOUT_INSIDE : LAYOUT_OUTSIDE;
+    const s = checkState(state, layout, this.dim, "importState nesterov");
     this.t = s.step as number;
     this.lr = s.lr as number;
-    loadVector(s, "velocity", this.velocity);
+    loadVector(s, this.lrInside ? "velocity" : "buffer", this.velocity);
   }
 
   setLearningRate(lr: number): void {

@@ -22,7 +22,6 @@ import {
   sgd,
   type ReferenceOptimizerFactory,
 } from "../optimizers/index.js";
-import { nesterovLrOutside } from "./nesterov-lr-outside.js";
 
 /** One value of a convention axis. */
 export interface AxisValue {
@@ -389,8 +388,8 @@ export function methodCatalogue(
         axes: [NESTEROV_FORM, NESTEROV_LR],
         variants: [
           ...axisVariants([NESTEROV_FORM, NESTEROV_LR], (v) => ({
-            factory: v.lrPlacement.key === "lr-inside" ? nesterov : nesterovLrOutside,
-            patch: { form: v.form.key },
+            factory: nesterov,
+            patch: { form: v.form.key, lrPlacement: v.lrPlacement.key },
           })),
           ...(["lr-inside", "lr-outside"] as const).map((form) => ({
             label: "heavy-ball momentum",

@@ -27,6 +27,16 @@ export const CASES: readonly OptimizerCase[] = [
     hyper: { lr: 0.02, form: "lookahead", weightDecay: 0.01 },
   },
   { label: "nesterov stored-lookahead", factory: nesterov, hyper: { lr: 0.02, form: "stored-lookahead" } },
+  {
+    label: "nesterov lookahead lr-outside",
+    factory: nesterov,
+    hyper: { lr: 0.02, form: "lookahead", lrPlacement: "lr-outside", weightDecay: 0.01 },
+  },
+  {
+    label: "nesterov stored-lookahead lr-outside",
+    factory: nesterov,
+    hyper: { lr: 0.02, form: "stored-lookahead", lrPlacement: "lr-outside" },
+  },
   { label: "adagrad", factory: adagrad, hyper: { lr: 0.1, initialAccumulator: 0.1, weightDecay: 0.01 } },
   { label: "rmsprop outside", factory: rmsprop, hyper: { lr: 0.01 } },
   {

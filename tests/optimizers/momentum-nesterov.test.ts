@@ -120,4 +120,32 @@ describe("nesterov (Nesterov 1983; Sutskever et al. 2013 eq. 3–4; Bengio et al
     // The two iterates are not equal (the forms are shifted, not identical).
     expect(Math.abs(u[0] - w[0])).toBeGreaterThan(0);
   });
+
+  it('"lr-outside" matches "lr-inside" for a constant lr (v = η·b) and rescales its buffer after an lr change', () => {
+    for (const form of ["lookahead", "stored-lookahead"] as const) {
+      const inside = nesterov.create({ lr: 0.05, momentum: 0.9, form }, 4);
+      const outside = nesterov.create({ lr: 0.05, momentum: 0.9, form, lrPlacement: "lr-outside" }, 4);
+      const xi = Float64Array.from(START);
+      const xo = Float64Array.from(START);
+      const oi = new DiagonalQuadratic(A);
+      const oo = new DiagonalQuadratic(A);
+      for (let k = 1; k <= 60; k++) {
+        inside.step(xi, oi);
+        outside.step(xo, oo);
+        for (let i = 0; i < 4; i++) expectRelClose(xo[i], xi[i], 1e-12, `${form} step ${k} coordinate ${i}`); // relative
+      }
+      const v = inside.exportState().velocity as number[];
+      const b = outside.exportState().buffer as number[];
+      for (let i = 0; i < 4; i++)
+        expectRelClose(0.05 * b[i], v[i], 1e-12, `${form} v = η·b, coordinate ${i}`); // relative
+      // Closed form of the next step after the lr drops to η' = 0.01 (stored form shown; the look-ahead form
+      // differs the same way): lr-inside keeps v, lr-outside's velocity becomes η'·b = (η'/η)·v at once.
+      inside.setLearningRate(0.01);
+      outside.setLearningRate(0.01);
+      inside.step(xi, oi);
+      outside.step(xo, oo);
+      const differs = [0, 1, 2, 3].some((i) => Math.abs(xo[i] - xi[i]) > 1e-9 * Math.abs(xi[i]));
+      expect(differs, form).toBe(true);
+    }
+  });
 });
