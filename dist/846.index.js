@@ -2168,7 +2168,7 @@ function sameField(a, b, what, get, fix) {
 /* harmony import */ var _core_json_js__WEBPACK_IMPORTED_MODULE_7__ = __webpack_require__(625);
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_5__ = __webpack_require__(4552);
 /* harmony import */ var _problems_index_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(5006);
-/* harmony import */ var _optimizers_index_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(2551);
+/* harmony import */ var _optimizers_index_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(6372);
 /* harmony import */ var _core_rng_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(2906);
 /* harmony import */ var _resolve_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(5966);
 /* harmony import */ var _recorder_js__WEBPACK_IMPORTED_MODULE_6__ = __webpack_require__(8022);

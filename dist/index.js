@@ -10698,7 +10698,7 @@ function hyperJsonSchema(factory) {
 
 /***/ }),
 
-/***/ 2551:
+/***/ 6372:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -10722,8 +10722,85 @@ __nccwpck_require__.d(__webpack_exports__, {
 var errors = __nccwpck_require__(4552);
 // EXTERNAL MODULE: ./build/package/optimizers/hyper.js
 var hyper = __nccwpck_require__(650);
-// EXTERNAL MODULE: ./build/package/optimizers/state.js
-var optimizers_state = __nccwpck_require__(6425);
+;// CONCATENATED MODULE: ./build/package/optimizers/state.js
+/**
+ * Export and import of a reference optimizer's state, for resuming a run in a fresh instance.
+ *
+ * A state is a flat JSON-safe record: `step` (the step counter, a nonnegative integer), `lr` (the
+ * current learning rate, which `setLearningRate` may have changed) and one array of `dim` finite
+ * numbers per internal buffer (moments, velocity, accumulator). Each optimizer names its keys in a
+ * layout; an import is checked completely against that layout before anything is copied, so a
+ * rejected state leaves the instance untouched. Keys differ between forms whose buffers mean
+ * different things (e.g. momentum's `velocity` vs `buffer`), so a state cannot be resumed by the wrong
+ * form by accident.
+ *
+ * Cost: O(dim · number of buffers); never called inside a step.
+ */
+
+/** Quotes a bad value; numbers (also inside arrays) keep their JavaScript spelling, so NaN shows as NaN. */
+function show(value) {
+    if (typeof value === "number")
+        return String(value);
+    if (Array.isArray(value)) {
+        const text = `[${value.map((v) => (typeof v === "number" ? String(v) : (0,errors/* quote */.h)(v))).join(",")}]`;
+        return text.length > 80 ? text.slice(0, 77) + "..." : text;
+    }
+    return (0,errors/* quote */.h)(value);
+}
+/**
+ * Throws an `InputError` unless `state` matches `layout` exactly: no missing or unknown keys, counts
+ * are nonnegative integers, `lr` is a positive finite number, vectors are arrays of `dim` finite numbers.
+ * `who` names the caller, e.g. `importState adam`.
+ */
+function checkState(state, layout, dim, who) {
+    const expected = Object.keys(layout);
+    if (state === null || typeof state !== "object" || Array.isArray(state)) {
+        throw new errors/* InputError */.d(`${who}: state must be an object with keys ${expected.join(", ")}, got ${show(state)}`);
+    }
+    const record = state;
+    for (const key of Object.keys(record)) {
+        if (!Object.prototype.hasOwnProperty.call(layout, key)) {
+            throw new errors/* InputError */.d(`${who}: state.${key} is not part of this optimizer's state (expected: ${expected.join(", ")})`);
+        }
+    }
+    for (const key of expected) {
+        if (!Object.prototype.hasOwnProperty.call(record, key)) {
+            throw new errors/* InputError */.d(`${who}: state.${key} is missing (expected: ${expected.join(", ")})`);
+        }
+        const value = record[key];
+        switch (layout[key]) {
+            case "count":
+                if (typeof value !== "number" || !Number.isSafeInteger(value) || value < 0) {
+                    throw new errors/* InputError */.d(`${who}: state.${key} must be a nonnegative integer, got ${show(value)}`);
+                }
+                break;
+            case "lr":
+                if (typeof value !== "number" || !Number.isFinite(value) || !(value > 0)) {
+                    throw new errors/* InputError */.d(`${who}: state.${key} must be a positive number, got ${show(value)}`);
+                }
+                break;
+            case "vector":
+                if (!Array.isArray(value) ||
+                    value.length !== dim ||
+                    !value.every((v) => typeof v === "number" && Number.isFinite(v))) {
+                    throw new errors/* InputError */.d(`${who}: state.${key} must be an array of ${dim} finite numbers, got ${show(value)}`);
+                }
+                break;
+        }
+    }
+    return record;
+}
+/** Copies a checked state vector into an instance buffer. */
+function loadVector(state, key, into) {
+    const values = state[key];
+    for (let i = 0; i < into.length; i++)
+        into[i] = values[i];
+}
+/** A buffer as a plain array (JSON-safe, exact: doubles round-trip through JSON text). */
+function saveVector(buffer) {
+    return Array.from(buffer);
+}
+
 ;// CONCATENATED MODULE: ./build/package/optimizers/adagrad.js
 
 
@@ -10787,13 +10864,13 @@ class Adagrad {
         this.t++;
     }
     exportState() {
-        return { step: this.t, lr: this.lr, sumSquares: (0,optimizers_state/* saveVector */.js)(this.sumSquares) };
+        return { step: this.t, lr: this.lr, sumSquares: saveVector(this.sumSquares) };
     }
     importState(state) {
-        const s = (0,optimizers_state/* checkState */.We)(state, LAYOUT, this.dim, "importState adagrad");
+        const s = checkState(state, LAYOUT, this.dim, "importState adagrad");
         this.t = s.step;
         this.lr = s.lr;
-        (0,optimizers_state/* loadVector */.YW)(s, "sumSquares", this.sumSquares);
+        loadVector(s, "sumSquares", this.sumSquares);
     }
     setLearningRate(lr) {
         this.lr = (0,hyper/* checkLearningRate */.N1)(lr, "setLearningRate adagrad");
@@ -11028,19 +11105,19 @@ class AdamFamily {
         this.t = t;
     }
     exportState() {
-        const state = { step: this.t, lr: this.lr, m: (0,optimizers_state/* saveVector */.js)(this.m), v: (0,optimizers_state/* saveVector */.js)(this.v) };
+        const state = { step: this.t, lr: this.lr, m: saveVector(this.m), v: saveVector(this.v) };
         if (this.amsgrad)
-            state[this.maxKey] = (0,optimizers_state/* saveVector */.js)(this.vMax);
+            state[this.maxKey] = saveVector(this.vMax);
         return state;
     }
     importState(state) {
-        const s = (0,optimizers_state/* checkState */.We)(state, this.layout, this.dim, `importState ${this.name}`);
+        const s = checkState(state, this.layout, this.dim, `importState ${this.name}`);
         this.t = s.step;
         this.lr = s.lr;
-        (0,optimizers_state/* loadVector */.YW)(s, "m", this.m);
-        (0,optimizers_state/* loadVector */.YW)(s, "v", this.v);
+        loadVector(s, "m", this.m);
+        loadVector(s, "v", this.v);
         if (this.amsgrad)
-            (0,optimizers_state/* loadVector */.YW)(s, this.maxKey, this.vMax);
+            loadVector(s, this.maxKey, this.vMax);
     }
     setLearningRate(lr) {
         this.lr = (0,hyper/* checkLearningRate */.N1)(lr, `setLearningRate ${this.name}`);
@@ -11180,13 +11257,13 @@ class Momentum {
         this.t++;
     }
     exportState() {
-        return { step: this.t, lr: this.lr, [this.key]: (0,optimizers_state/* saveVector */.js)(this.buf) };
+        return { step: this.t, lr: this.lr, [this.key]: saveVector(this.buf) };
     }
     importState(state) {
-        const s = (0,optimizers_state/* checkState */.We)(state, this.layout, this.dim, "importState momentum");
+        const s = checkState(state, this.layout, this.dim, "importState momentum");
         this.t = s.step;
         this.lr = s.lr;
-        (0,optimizers_state/* loadVector */.YW)(s, this.key, this.buf);
+        loadVector(s, this.key, this.buf);
     }
     setLearningRate(lr) {
         this.lr = (0,hyper/* checkLearningRate */.N1)(lr, "setLearningRate momentum");
@@ -11224,6 +11301,14 @@ const NESTEROV_HYPER = {
             '"stored-lookahead": the parameters hold u = w − γv and the gradient is taken there ' +
             "(Bengio, Boulanger-Lewandowski & Pascanu 2013, §3.5). Same algorithm, shifted iterates.",
     },
+    lrPlacement: {
+        type: "choice",
+        choices: ["lr-inside", "lr-outside"],
+        default: "lr-inside",
+        description: '"lr-inside": v = γv + η·g, as in Sutskever et al. 2013 eq. 3–4. "lr-outside": a buffer b = γb + g with ' +
+            "steps of η·(…), as many frameworks write it (common practice); with v = η·b the same trajectory " +
+            "while η is constant, different once η changes (the whole buffer is rescaled by the new η at once).",
+    },
     weightDecay: {
         type: "number",
         minimum: 0,
@@ -11231,7 +11316,9 @@ const NESTEROV_HYPER = {
         description: "Coupled L2 coefficient λ: λ times the point where the gradient is taken is added to it.",
     },
 };
-const nesterov_LAYOUT = { step: "count", lr: "lr", velocity: "vector" };
+/** The state's vector means v = η·b with the learning rate inside, b without: different keys, no mix-up. */
+const LAYOUT_INSIDE = { step: "count", lr: "lr", velocity: "vector" };
+const LAYOUT_OUTSIDE = { step: "count", lr: "lr", buffer: "vector" };
 class Nesterov {
     dim;
     grad;
@@ -11242,10 +11329,12 @@ class Nesterov {
     gamma;
     weightDecay;
     stored;
+    lrInside;
     t = 0;
     constructor(hyper, dim) {
         this.dim = dim;
         this.stored = hyper.form === "stored-lookahead";
+        this.lrInside = hyper.lrPlacement !== "lr-outside";
         this.grad = new Float64Array(dim);
         this.velocity = new Float64Array(dim);
         this.ahead = new Float64Array(this.stored ? 0 : dim);
@@ -11260,36 +11349,62 @@ class Nesterov {
         const lr = this.lr;
         const gamma = this.gamma;
         const wd = this.weightDecay;
-        if (this.stored) {
+        if (this.lrInside) {
+            if (this.stored) {
+                oracle.evaluate(x, g);
+                for (let i = 0; i < this.dim; i++) {
+                    const gi = g[i] + wd * x[i];
+                    const vi = gamma * v[i] + lr * gi;
+                    v[i] = vi;
+                    x[i] -= gamma * vi + lr * gi;
+                }
+            }
+            else {
+                const a = this.ahead;
+                for (let i = 0; i < this.dim; i++)
+                    a[i] = x[i] - gamma * v[i];
+                oracle.evaluate(a, g);
+                for (let i = 0; i < this.dim; i++) {
+                    const vi = gamma * v[i] + lr * (g[i] + wd * a[i]);
+                    v[i] = vi;
+                    x[i] -= vi;
+                }
+            }
+        }
+        else if (this.stored) {
+            // v holds the buffer b: b ← γb + g; u ← u − η·(g + γb).
             oracle.evaluate(x, g);
             for (let i = 0; i < this.dim; i++) {
                 const gi = g[i] + wd * x[i];
-                const vi = gamma * v[i] + lr * gi;
-                v[i] = vi;
-                x[i] -= gamma * vi + lr * gi;
+                const bi = gamma * v[i] + gi;
+                v[i] = bi;
+                x[i] -= lr * (gi + gamma * bi);
             }
         }
         else {
+            // v holds the buffer b: the look-ahead point is w − η·γ·b; b ← γb + g; w ← w − η·b.
             const a = this.ahead;
             for (let i = 0; i < this.dim; i++)
-                a[i] = x[i] - gamma * v[i];
+                a[i] = x[i] - lr * gamma * v[i];
             oracle.evaluate(a, g);
             for (let i = 0; i < this.dim; i++) {
-                const vi = gamma * v[i] + lr * (g[i] + wd * a[i]);
-                v[i] = vi;
-                x[i] -= vi;
+                const bi = gamma * v[i] + (g[i] + wd * a[i]);
+                v[i] = bi;
+                x[i] -= lr * bi;
             }
         }
         this.t++;
     }
     exportState() {
-        return { step: this.t, lr: this.lr, velocity: (0,optimizers_state/* saveVector */.js)(this.velocity) };
+        const key = this.lrInside ? "velocity" : "buffer";
+        return { step: this.t, lr: this.lr, [key]: saveVector(this.velocity) };
     }
     importState(state) {
-        const s = (0,optimizers_state/* checkState */.We)(state, nesterov_LAYOUT, this.dim, "importState nesterov");
+        const layout = this.lrInside ? LAYOUT_INSIDE : LAYOUT_OUTSIDE;
+        const s = checkState(state, layout, this.dim, "importState nesterov");
         this.t = s.step;
         this.lr = s.lr;
-        (0,optimizers_state/* loadVector */.YW)(s, "velocity", this.velocity);
+        loadVector(s, this.lrInside ? "velocity" : "buffer", this.velocity);
     }
     setLearningRate(lr) {
         this.lr = (0,hyper/* checkLearningRate */.N1)(lr, "setLearningRate nesterov");
@@ -11378,13 +11493,13 @@ class RmsProp {
         this.t++;
     }
     exportState() {
-        return { step: this.t, lr: this.lr, meanSquare: (0,optimizers_state/* saveVector */.js)(this.meanSquare) };
+        return { step: this.t, lr: this.lr, meanSquare: saveVector(this.meanSquare) };
     }
     importState(state) {
-        const s = (0,optimizers_state/* checkState */.We)(state, rmsprop_LAYOUT, this.dim, "importState rmsprop");
+        const s = checkState(state, rmsprop_LAYOUT, this.dim, "importState rmsprop");
         this.t = s.step;
         this.lr = s.lr;
-        (0,optimizers_state/* loadVector */.YW)(s, "meanSquare", this.meanSquare);
+        loadVector(s, "meanSquare", this.meanSquare);
     }
     setLearningRate(lr) {
         this.lr = (0,hyper/* checkLearningRate */.N1)(lr, "setLearningRate rmsprop");
@@ -11441,7 +11556,7 @@ class Sgd {
         return { step: this.t, lr: this.lr };
     }
     importState(state) {
-        const s = (0,optimizers_state/* checkState */.We)(state, sgd_LAYOUT, this.dim, "importState sgd");
+        const s = checkState(state, sgd_LAYOUT, this.dim, "importState sgd");
         this.t = s.step;
         this.lr = s.lr;
     }
@@ -11497,96 +11612,6 @@ function getOptimizer(name, where = "optimizer name") {
         throw new errors/* InputError */.d(`${where} must name a reference optimizer (known: ${OPTIMIZER_NAMES.join(", ")}), got ${(0,errors/* quote */.h)(name)}`);
     }
     return found;
-}
-
-
-/***/ }),
-
-/***/ 6425:
-/***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   We: () => (/* binding */ checkState),
-/* harmony export */   YW: () => (/* binding */ loadVector),
-/* harmony export */   js: () => (/* binding */ saveVector)
-/* harmony export */ });
-/* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4552);
-/**
- * Export and import of a reference optimizer's state, for resuming a run in a fresh instance.
- *
- * A state is a flat JSON-safe record: `step` (the step counter, a nonnegative integer), `lr` (the
- * current learning rate, which `setLearningRate` may have changed) and one array of `dim` finite
- * numbers per internal buffer (moments, velocity, accumulator). Each optimizer names its keys in a
- * layout; an import is checked completely against that layout before anything is copied, so a
- * rejected state leaves the instance untouched. Keys differ between forms whose buffers mean
- * different things (e.g. momentum's `velocity` vs `buffer`), so a state cannot be resumed by the wrong
- * form by accident.
- *
- * Cost: O(dim · number of buffers); never called inside a step.
- */
-
-/** Quotes a bad value; numbers (also inside arrays) keep their JavaScript spelling, so NaN shows as NaN. */
-function show(value) {
-    if (typeof value === "number")
-        return String(value);
-    if (Array.isArray(value)) {
-        const text = `[${value.map((v) => (typeof v === "number" ? String(v) : (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(v))).join(",")}]`;
-        return text.length > 80 ? text.slice(0, 77) + "..." : text;
-    }
-    return (0,_core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .quote */ .h)(value);
-}
-/**
- * Throws an `InputError` unless `state` matches `layout` exactly: no missing or unknown keys, counts
- * are nonnegative integers, `lr` is a positive finite number, vectors are arrays of `dim` finite numbers.
- * `who` names the caller, e.g. `importState adam`.
- */
-function checkState(state, layout, dim, who) {
-    const expected = Object.keys(layout);
-    if (state === null || typeof state !== "object" || Array.isArray(state)) {
-        throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state must be an object with keys ${expected.join(", ")}, got ${show(state)}`);
-    }
-    const record = state;
-    for (const key of Object.keys(record)) {
-        if (!Object.prototype.hasOwnProperty.call(layout, key)) {
-            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state.${key} is not part of this optimizer's state (expected: ${expected.join(", ")})`);
-        }
-    }
-    for (const key of expected) {
-        if (!Object.prototype.hasOwnProperty.call(record, key)) {
-            throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state.${key} is missing (expected: ${expected.join(", ")})`);
-        }
-        const value = record[key];
-        switch (layout[key]) {
-            case "count":
-                if (typeof value !== "number" || !Number.isSafeInteger(value) || value < 0) {
-                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state.${key} must be a nonnegative integer, got ${show(value)}`);
-                }
-                break;
-            case "lr":
-                if (typeof value !== "number" || !Number.isFinite(value) || !(value > 0)) {
-                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state.${key} must be a positive number, got ${show(value)}`);
-                }
-                break;
-            case "vector":
-                if (!Array.isArray(value) ||
-                    value.length !== dim ||
-                    !value.every((v) => typeof v === "number" && Number.isFinite(v))) {
-                    throw new _core_errors_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`${who}: state.${key} must be an array of ${dim} finite numbers, got ${show(value)}`);
-                }
-                break;
-        }
-    }
-    return record;
-}
-/** Copies a checked state vector into an instance buffer. */
-function loadVector(state, key, into) {
-    const values = state[key];
-    for (let i = 0; i < into.length; i++)
-        into[i] = values[i];
-}
-/** A buffer as a plain array (JSON-safe, exact: doubles round-trip through JSON text). */
-function saveVector(buffer) {
-    return Array.from(buffer);
 }
 
 
@@ -14099,7 +14124,7 @@ function logCheckpoints(steps, count = 32) {
 /* harmony export */   uk: () => (/* binding */ loadOptimizer)
 /* harmony export */ });
 /* harmony import */ var _core_errors_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4552);
-/* harmony import */ var _optimizers_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2551);
+/* harmony import */ var _optimizers_index_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6372);
 /* harmony import */ var _adapters_module_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6902);
 /* harmony import */ var _adapters_use_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(2683);
 /**
@@ -14685,7 +14710,7 @@ else {
     if (compiled)
         (0,pool/* setWorkerEntry */.HU)(new URL(import.meta.url), { [WORKER_MARKER]: true });
     if (process.env[engine_marker/* ENGINE_MARKER */.q] === "1") {
-        void Promise.all(/* import() */[__nccwpck_require__.e(815), __nccwpck_require__.e(846), __nccwpck_require__.e(704)]).then(__nccwpck_require__.bind(__nccwpck_require__, 8704)).then(({ engineMain }) => engineMain(process.argv.slice(2)));
+        void Promise.all(/* import() */[__nccwpck_require__.e(815), __nccwpck_require__.e(846), __nccwpck_require__.e(922)]).then(__nccwpck_require__.bind(__nccwpck_require__, 922)).then(({ engineMain }) => engineMain(process.argv.slice(2)));
     }
     else {
         if (compiled)

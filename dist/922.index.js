@@ -1,8 +1,8 @@
-export const id = 704;
-export const ids = [704];
+export const id = 922;
+export const ids = [922];
 export const modules = {
 
-/***/ 8704:
+/***/ 922:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -27,8 +27,8 @@ var version = __webpack_require__(6063);
 var problems = __webpack_require__(5006);
 // EXTERNAL MODULE: ./build/package/core/rng.js
 var core_rng = __webpack_require__(2906);
-// EXTERNAL MODULE: ./build/package/optimizers/index.js + 7 modules
-var optimizers = __webpack_require__(2551);
+// EXTERNAL MODULE: ./build/package/optimizers/index.js + 8 modules
+var optimizers = __webpack_require__(6372);
 // EXTERNAL MODULE: external "node:os"
 var external_node_os_ = __webpack_require__(8161);
 // EXTERNAL MODULE: external "node:path"
@@ -4143,105 +4143,7 @@ function inProcessSource(factory, label = factory.name) {
     };
 }
 
-// EXTERNAL MODULE: ./build/package/optimizers/state.js
-var optimizers_state = __webpack_require__(6425);
-;// CONCATENATED MODULE: ./build/package/reference/nesterov-lr-outside.js
-
-
-const NESTEROV_LR_OUTSIDE_HYPER = {
-    lr: {
-        type: "number",
-        exclusiveMinimum: 0,
-        default: 0.01,
-        description: "Learning rate η (common practice).",
-    },
-    momentum: {
-        type: "number",
-        minimum: 0,
-        exclusiveMaximum: 1,
-        default: 0.9,
-        description: "Momentum coefficient γ in [0, 1) (common practice).",
-    },
-    form: {
-        type: "choice",
-        choices: ["lookahead", "stored-lookahead"],
-        default: "stored-lookahead",
-        description: '"lookahead": x holds w; "stored-lookahead": x holds the look-ahead point (as frameworks write it).',
-    },
-    weightDecay: { type: "number", minimum: 0, default: 0, description: "Coupled L2 coefficient λ." },
-};
-const LAYOUT = { step: "count", lr: "lr", buffer: "vector" };
-class NesterovLrOutside {
-    dim;
-    grad;
-    buffer;
-    ahead;
-    lr;
-    gamma;
-    weightDecay;
-    stored;
-    t = 0;
-    constructor(hyper, dim) {
-        this.dim = dim;
-        this.stored = hyper.form === "stored-lookahead";
-        this.grad = new Float64Array(dim);
-        this.buffer = new Float64Array(dim);
-        this.ahead = new Float64Array(this.stored ? 0 : dim);
-        this.lr = hyper.lr;
-        this.gamma = hyper.momentum;
-        this.weightDecay = hyper.weightDecay;
-    }
-    step(x, oracle) {
-        (0,optimizers_hyper/* checkIterate */.rA)(x, this.dim, "nesterov-lr-outside");
-        const g = this.grad;
-        const b = this.buffer;
-        const lr = this.lr;
-        const gamma = this.gamma;
-        const wd = this.weightDecay;
-        if (this.stored) {
-            oracle.evaluate(x, g);
-            for (let i = 0; i < this.dim; i++) {
-                const gi = g[i] + wd * x[i];
-                const bi = gamma * b[i] + gi;
-                b[i] = bi;
-                x[i] -= lr * (gi + gamma * bi);
-            }
-        }
-        else {
-            const a = this.ahead;
-            for (let i = 0; i < this.dim; i++)
-                a[i] = x[i] - lr * gamma * b[i];
-            oracle.evaluate(a, g);
-            for (let i = 0; i < this.dim; i++) {
-                const bi = gamma * b[i] + (g[i] + wd * a[i]);
-                b[i] = bi;
-                x[i] -= lr * bi;
-            }
-        }
-        this.t++;
-    }
-    exportState() {
-        return { step: this.t, lr: this.lr, buffer: (0,optimizers_state/* saveVector */.js)(this.buffer) };
-    }
-    importState(state) {
-        const s = (0,optimizers_state/* checkState */.We)(state, LAYOUT, this.dim, "importState nesterov-lr-outside");
-        this.t = s.step;
-        this.lr = s.lr;
-        (0,optimizers_state/* loadVector */.YW)(s, "buffer", this.buffer);
-    }
-    setLearningRate(lr) {
-        this.lr = (0,optimizers_hyper/* checkLearningRate */.N1)(lr, "setLearningRate nesterov-lr-outside");
-    }
-}
-const nesterovLrOutside = (0,optimizers_hyper/* defineOptimizer */.B)({
-    name: "nesterov-lr-outside",
-    title: "Nesterov's accelerated gradient, learning rate outside the velocity (common practice)",
-    hyperSpecs: NESTEROV_LR_OUTSIDE_HYPER,
-    build: (hyper, dim) => new NesterovLrOutside(hyper, dim),
-});
-
 ;// CONCATENATED MODULE: ./build/package/reference/variants.js
-
 
 const SUTSKEVER = "Sutskever, Martens, Dahl & Hinton (2013), On the importance of initialization and momentum in deep learning, ICML, PMLR 28(3):1139–1147";
 const KINGMA_BA = "Kingma & Ba (2015), Adam: A Method for Stochastic Optimization, ICLR, arXiv:1412.6980";
@@ -4519,8 +4421,8 @@ function methodCatalogue(method, claim, settable) {
                 axes: [NESTEROV_FORM, NESTEROV_LR],
                 variants: [
                     ...axisVariants([NESTEROV_FORM, NESTEROV_LR], (v) => ({
-                        factory: v.lrPlacement.key === "lr-inside" ? optimizers/* nesterov */.fX : nesterovLrOutside,
-                        patch: { form: v.form.key },
+                        factory: optimizers/* nesterov */.fX,
+                        patch: { form: v.form.key, lrPlacement: v.lrPlacement.key },
                     })),
                     ...["lr-inside", "lr-outside"].map((form) => ({
                         label: "heavy-ball momentum",
