@@ -366,9 +366,9 @@ describe("conformance: the forms it compares with reproduce published values on 
     const unscaled = first("adamw", { lr: 1e-3, weightDecay: 1e-2, decayScaledByLr: false }, FLAT, 100)[0];
     const l2 = first("adam", { lr: 1e-3, weightDecay: 1e-2 }, FLAT, 100)[0];
     // absolute, 1e-14: a hundred multiplications, each rounded to about 1e-16
-    expect(Math.abs(scaled - fixture("adamw_zero_grad_scaled_100"))).toBeLessThanOrEqual(1e-14); // 0.9990005 in SOURCES
+    expect(Math.abs(scaled - fixture("adamw_zero_grad_scaled_100"))).toBeLessThanOrEqual(1e-14); // 0.9990005 = (1 − lr·λ)^100: Loshchilov & Hutter (2019), Algorithm 2, decay scaled by lr [recomputed]
     expect(Math.abs(unscaled - 0.99 ** 100)).toBeLessThanOrEqual(1e-14); // (1 − λ)^100
-    expect(Math.abs(l2 - fixture("adam_l2_zero_grad_100"))).toBeLessThanOrEqual(1e-12); // absolute; 0.9017437 in SOURCES
+    expect(Math.abs(l2 - fixture("adam_l2_zero_grad_100"))).toBeLessThanOrEqual(1e-12); // absolute; 0.9017437 = Adam with coupled L2 (Kingma & Ba 2015, Algorithm 1, gradient + λθ) [recomputed]
   });
 });
 

@@ -5,9 +5,9 @@
  * to perform the very same floating-point operations in the same order as the reference, plus one
  * change. tests/regressions/regressions.test.ts checks that each family with no change is bitwise
  * identical to the reference (verdict "unchanged"), so a variant differs from the reference by its
- * change alone. Several changes mirror regressions that happened in widely used frameworks
- * (/work/shared/SOURCES.md lists them: ε moved, step counter, AdamW turned into Adam + L2, AMSGrad lost,
- * ε inside/outside √ in RMSProp).
+ * change alone. Several changes mirror kinds of regression that widely used frameworks have had (ε moved,
+ * step counter, AdamW turned into Adam + L2, AMSGrad lost, ε inside/outside √ in RMSProp; from the
+ * project's notes, common practice, no single source).
  */
 import type { Hyper, Optimizer, OptimizerFactory, Oracle } from "../../src/core/types.js";
 import { getOptimizer } from "../../src/optimizers/index.js";
