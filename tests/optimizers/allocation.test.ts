@@ -76,18 +76,35 @@ async function measure(step: (x: Float64Array) => void): Promise<{ growth: numbe
   return { growth: after - before, collections };
 }
 
+/**
+ * Until the optimizing compiler has finished (it works on a background thread, which a busy machine
+ * delays), a step runs in a tier that boxes intermediate numbers. So up to three measurements are taken,
+ * with a pause between them for the compiler, and the first clean one counts; a step that allocates once
+ * compiled allocates in all three (the control below checks exactly that).
+ */
+async function measureCompiled(
+  step: (x: Float64Array) => void,
+): Promise<{ growth: number; collections: number }> {
+  let result = await measure(step);
+  for (let attempt = 1; attempt < 3 && (result.collections > 0 || result.growth >= GROWTH_BOUND); attempt++) {
+    await new Promise<void>((resolve) => setTimeout(resolve, 250));
+    result = await measure(step);
+  }
+  return result;
+}
+
 describe("no allocation per step", () => {
   it.each(CASES.map((c) => [c.label, c] as const))("%s", async (_label, c) => {
     const opt = c.factory.create(c.hyper, DIM);
-    const result = await measure((x) => opt.step(x, oracle));
+    const result = await measureCompiled((x) => opt.step(x, oracle));
     expect(result.collections).toBe(0);
     expect(result.growth).toBeLessThan(GROWTH_BOUND);
   });
 
-  it("control: one small typed array per step is detected", async () => {
+  it("control: one small typed array per step is detected, on every attempt", async () => {
     const opt = adam.create({}, DIM);
     const kept: { last: Float64Array | null } = { last: null };
-    const result = await measure((x) => {
+    const result = await measureCompiled((x) => {
       opt.step(x, oracle);
       kept.last = new Float64Array(4);
     });

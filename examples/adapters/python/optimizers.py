@@ -178,11 +178,13 @@ class Nesterov:
 
     name = "nesterov"
     title = "Nesterov's accelerated gradient (look-ahead form), Python port of reference:nesterov"
-    defaults = {"lr": 0.01, "momentum": 0.9, "form": "lookahead", "weightDecay": 0.0}
+    defaults = {"lr": 0.01, "momentum": 0.9, "form": "lookahead", "lrPlacement": "lr-inside", "weightDecay": 0.0}
 
     def __init__(self, hyper, dim):
         if hyper["form"] != "lookahead":
             raise ValueError('only form "lookahead" is ported, got %r' % (hyper["form"],))
+        if hyper.get("lrPlacement", "lr-inside") != "lr-inside":
+            raise ValueError('only lrPlacement "lr-inside" is ported, got %r' % (hyper["lrPlacement"],))
         self.lr = float(hyper["lr"])
         self.gamma = float(hyper["momentum"])
         self.wd = float(hyper["weightDecay"])
